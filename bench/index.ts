@@ -1,0 +1,7 @@
+// `npm run bench` runs this file: import every module's benchmarks, then run them.
+// `npm run bench -- <regex>` runs only the benchmarks whose names match.
+import { runAll } from "./harness.js";
+import "./errors.bench.js";
+
+const pattern = process.argv[2];
+await runAll(pattern ? new RegExp(pattern) : undefined);

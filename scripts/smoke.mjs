@@ -1,0 +1,49 @@
+// Consumer smoke test: install the packed tarball (made by pack-check) into a fresh project
+// and use it from plain ESM, from CommonJS, and from a type-checked TypeScript file.
+import { execFileSync } from "node:child_process";
+import { mkdtempSync, readdirSync, writeFileSync, rmSync } from "node:fs";
+import { tmpdir } from "node:os";
+import { join, resolve } from "node:path";
+
+const root = resolve(import.meta.dirname, "..");
+const packDir = join(root, ".tmp", "pack");
+const tgz = readdirSync(packDir).find((f) => f.endsWith(".tgz"));
+if (!tgz) throw new Error("smoke: no tarball in .tmp/pack; run scripts/pack-check.mjs first");
+const dir = mkdtempSync(join(tmpdir(), "flexura-smoke-"));
+const run = (cmd, args) => execFileSync(cmd, args, { cwd: dir, stdio: "inherit" });
+try {
+  writeFileSync(join(dir, "package.json"), JSON.stringify({ name: "smoke", private: true, type: "module" }));
+  run("npm", ["install", "--no-audit", "--no-fund", "--prefer-offline", "--loglevel=error", join(packDir, tgz)]);
+  writeFileSync(
+    join(dir, "esm.mjs"),
+    `import * as f from "flexura";
+if (typeof f.isFlexuraError !== "function") throw new Error("esm: isFlexuraError missing");
+console.log("smoke esm ok:", Object.keys(f).length, "exports");
+`,
+  );
+  writeFileSync(
+    join(dir, "cjs.cjs"),
+    `const f = require("flexura");
+if (typeof f.isFlexuraError !== "function") throw new Error("cjs: isFlexuraError missing");
+console.log("smoke cjs ok");
+`,
+  );
+  writeFileSync(
+    join(dir, "check.ts"),
+    `import { attempt, isFlexuraError, type Result } from "flexura";
+const r: Result<number> = attempt(() => 1);
+const ok: boolean = r.ok && !isFlexuraError(r.value);
+export { ok };
+`,
+  );
+  writeFileSync(
+    join(dir, "tsconfig.json"),
+    JSON.stringify({ compilerOptions: { strict: true, module: "NodeNext", moduleResolution: "NodeNext", target: "ES2022", noEmit: true, skipLibCheck: false, types: [] }, files: ["check.ts"] }),
+  );
+  run("node", ["esm.mjs"]);
+  run("node", ["cjs.cjs"]);
+  run("node", [join(root, "node_modules", "typescript", "bin", "tsc"), "-p", "tsconfig.json"]);
+  console.log("smoke typescript ok");
+} finally {
+  rmSync(dir, { recursive: true, force: true });
+}

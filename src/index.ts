@@ -1,0 +1,9 @@
+/**
+ * flexura: beams and cross-sections for the engineers who size them.
+ *
+ * Sign conventions: x runs from the left end; loads positive downward; reactions positive
+ * upward; bending moment positive when sagging; deflection positive upward.
+ *
+ * @packageDocumentation
+ */
+export * from "./errors/index.js";

@@ -1,0 +1,18 @@
+import { defineConfig } from "tsdown";
+
+/** One build entry per public module; keep in step with the `exports` map in package.json. */
+export const entries = {
+  index: "src/index.ts",
+} as const;
+
+export default defineConfig({
+  entry: entries,
+  format: ["esm", "cjs"],
+  dts: true,
+  sourcemap: false,
+  clean: true,
+  platform: "neutral",
+  target: "es2022",
+  outDir: "dist",
+  external: ["decimal.js"],
+});

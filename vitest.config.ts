@@ -1,0 +1,14 @@
+import { defineConfig } from "vitest/config";
+
+export default defineConfig({
+  test: {
+    include: ["tests/**/*.test.ts"],
+    coverage: {
+      provider: "v8",
+      include: ["src/**/*.ts"],
+      exclude: ["src/**/index.ts", "src/cli/main.ts"],
+      thresholds: { lines: 90, branches: 85 },
+      reporter: ["text-summary"],
+    },
+  },
+});
