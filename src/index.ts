@@ -7,3 +7,7 @@
  * @packageDocumentation
  */
 export * from "./errors/index.js";
+export * from "./math/index.js";
+export * from "./loads/index.js";
+export * from "./supports/index.js";
+export * from "./beam/index.js";
