@@ -4,6 +4,7 @@ import { runAll } from "./harness.js";
 import "./errors.bench.js";
 import "./math.bench.js";
 import "./beam.bench.js";
+import "./stress.bench.js";
 
 const pattern = process.argv[2];
 await runAll(pattern ? new RegExp(pattern) : undefined);
