@@ -19,4 +19,6 @@ if (bad.length > 0) {
 console.log(`pack-check: ${info.files.length} files, ${(info.size / 1024).toFixed(1)} KiB packed`);
 const bin = (name) => join(root, "node_modules", ".bin", name);
 execFileSync(bin("publint"), ["run", tarball, "--strict"], { stdio: "inherit" });
-execFileSync(bin("attw"), [tarball], { stdio: "inherit" });
+// Subpath entries (flexura/units, ...) live in the exports map, which TypeScript's old "node10"
+// resolution does not read; engines.node is >= 20, so check the node16 profile (node16, bundler).
+execFileSync(bin("attw"), [tarball, "--profile", "node16"], { stdio: "inherit" });
