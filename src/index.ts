@@ -8,3 +8,5 @@
  */
 export * from "./errors/index.js";
 export * from "./units/index.js";
+export * from "./model/index.js";
+export * from "./stress/index.js";

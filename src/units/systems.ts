@@ -3,9 +3,10 @@ import type { QuantityKind } from "./kinds.js";
 /**
  * What a unit system gives a unit for: every {@link QuantityKind}, plus two display roles that
  * share a kind with another but are customarily shown in other units: `deflection` (a length,
- * shown small: mm or in) and `modulus` (a stress: elastic modulus, shown in GPa or ksi).
+ * shown small: mm or in), `sectionLength` (a length: cross-section dimensions and fibre
+ * positions, mm or in) and `modulus` (a stress: elastic modulus, shown in GPa or ksi).
  */
-export type DisplayRole = QuantityKind | "deflection" | "modulus";
+export type DisplayRole = QuantityKind | "deflection" | "modulus" | "sectionLength";
 
 /**
  * A named set of units, one per {@link DisplayRole}, used to show results and to read model
@@ -47,6 +48,8 @@ export interface UnitSystem {
   readonly dimensionless: string;
   /** Unit for deflections (a length, usually smaller than `length`). */
   readonly deflection: string;
+  /** Unit for cross-section dimensions and fibre positions (a length, usually smaller than `length`). */
+  readonly sectionLength: string;
 }
 
 /** The names of the presets in {@link unitSystems}. */
@@ -58,13 +61,13 @@ const system = (s: Omit<UnitSystem, "kind" | "rotation" | "dimensionless">): Uni
 /**
  * The preset unit systems, by name:
  *
- * | preset | length | force | moment | w | stress | modulus | area | I | S | k | k_rot | deflection |
- * | --- | --- | --- | --- | --- | --- | --- | --- | --- | --- | --- | --- | --- |
- * | `siNewtonMetre` | m | N | N*m | N/m | Pa | Pa | m^2 | m^4 | m^3 | N/m | N*m/rad | m |
- * | `siKilonewtonMetre` | m | kN | kN*m | kN/m | MPa | GPa | mm^2 | mm^4 | mm^3 | kN/m | kN*m/rad | mm |
- * | `siNewtonMillimetre` | mm | N | N*mm | N/mm | MPa | MPa | mm^2 | mm^4 | mm^3 | N/mm | N*mm/rad | mm |
- * | `usKipFoot` | ft | kip | kip*ft | kip/ft | ksi | ksi | in^2 | in^4 | in^3 | kip/in | kip*ft/rad | in |
- * | `usKipInch` | in | kip | kip*in | kip/in | ksi | ksi | in^2 | in^4 | in^3 | kip/in | kip*in/rad | in |
+ * | preset | length | force | moment | w | stress | modulus | section length | area | I | S | k | k_rot | deflection |
+ * | --- | --- | --- | --- | --- | --- | --- | --- | --- | --- | --- | --- | --- | --- |
+ * | `siNewtonMetre` | m | N | N*m | N/m | Pa | Pa | m | m^2 | m^4 | m^3 | N/m | N*m/rad | m |
+ * | `siKilonewtonMetre` | m | kN | kN*m | kN/m | MPa | GPa | mm | mm^2 | mm^4 | mm^3 | kN/m | kN*m/rad | mm |
+ * | `siNewtonMillimetre` | mm | N | N*mm | N/mm | MPa | MPa | mm | mm^2 | mm^4 | mm^3 | N/mm | N*mm/rad | mm |
+ * | `usKipFoot` | ft | kip | kip*ft | kip/ft | ksi | ksi | in | in^2 | in^4 | in^3 | kip/in | kip*ft/rad | in |
+ * | `usKipInch` | in | kip | kip*in | kip/in | ksi | ksi | in | in^2 | in^4 | in^3 | kip/in | kip*in/rad | in |
  *
  * Rotations are in rad and plain numbers have no unit in every preset.
  *
@@ -90,6 +93,7 @@ export const unitSystems: Readonly<Record<UnitSystemName, UnitSystem>> = Object.
     translationalStiffness: "N/m",
     rotationalStiffness: "N*m/rad",
     deflection: "m",
+    sectionLength: "m",
   }),
   siKilonewtonMetre: system({
     name: "siKilonewtonMetre",
@@ -106,6 +110,7 @@ export const unitSystems: Readonly<Record<UnitSystemName, UnitSystem>> = Object.
     translationalStiffness: "kN/m",
     rotationalStiffness: "kN*m/rad",
     deflection: "mm",
+    sectionLength: "mm",
   }),
   siNewtonMillimetre: system({
     name: "siNewtonMillimetre",
@@ -122,6 +127,7 @@ export const unitSystems: Readonly<Record<UnitSystemName, UnitSystem>> = Object.
     translationalStiffness: "N/mm",
     rotationalStiffness: "N*mm/rad",
     deflection: "mm",
+    sectionLength: "mm",
   }),
   usKipFoot: system({
     name: "usKipFoot",
@@ -138,6 +144,7 @@ export const unitSystems: Readonly<Record<UnitSystemName, UnitSystem>> = Object.
     translationalStiffness: "kip/in",
     rotationalStiffness: "kip*ft/rad",
     deflection: "in",
+    sectionLength: "in",
   }),
   usKipInch: system({
     name: "usKipInch",
@@ -154,11 +161,12 @@ export const unitSystems: Readonly<Record<UnitSystemName, UnitSystem>> = Object.
     translationalStiffness: "kip/in",
     rotationalStiffness: "kip*in/rad",
     deflection: "in",
+    sectionLength: "in",
   }),
 });
 
 /**
- * The kind of quantity a display role holds: `deflection` is a length, `modulus` a stress,
+ * The kind of quantity a display role holds: `deflection` and `sectionLength` are lengths, `modulus` a stress,
  * and every other role is its own kind.
  *
  * @example
@@ -169,6 +177,7 @@ export const unitSystems: Readonly<Record<UnitSystemName, UnitSystem>> = Object.
 export function kindOfRole(role: DisplayRole): QuantityKind {
   switch (role) {
     case "deflection":
+    case "sectionLength":
       return "length";
     case "modulus":
       return "stress";

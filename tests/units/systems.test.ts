@@ -13,7 +13,7 @@ import {
   type UnitSystem,
 } from "../../src/units/index.js";
 
-const ROLES: readonly DisplayRole[] = [...quantityKinds, "deflection", "modulus"];
+const ROLES: readonly DisplayRole[] = [...quantityKinds, "deflection", "modulus", "sectionLength"];
 
 describe("unitSystems", () => {
   it.each(Object.values(unitSystems))("every unit of preset $name is of its role's kind", (system: UnitSystem) => {
@@ -39,6 +39,7 @@ describe("unitSystems", () => {
   it("kindOfRole maps the display roles", () => {
     expect(kindOfRole("deflection")).toBe("length");
     expect(kindOfRole("modulus")).toBe("stress");
+    expect(kindOfRole("sectionLength")).toBe("length");
     expect(kindOfRole("moment")).toBe("moment");
   });
 
