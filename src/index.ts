@@ -8,5 +8,6 @@
  */
 export * from "./errors/index.js";
 export * from "./units/index.js";
+export * from "./section/index.js";
 export * from "./model/index.js";
 export * from "./stress/index.js";
