@@ -4,6 +4,7 @@ import { defineConfig } from "tsdown";
 export const entries = {
   index: "src/index.ts",
   units: "src/units/index.ts",
+  beam: "src/beam/entry.ts",
   section: "src/section/index.ts",
   model: "src/model/index.ts",
   stress: "src/stress/index.ts",
