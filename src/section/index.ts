@@ -26,3 +26,5 @@ export type { MirrorAxis } from "./transform.js";
 export { translatePart, rotatePart, mirrorPart, translateSection, rotateSection, mirrorSection } from "./transform.js";
 export type { SecondMomentsAbout } from "./about.js";
 export { secondMomentAbout, trySecondMomentAbout } from "./about.js";
+export type { PlasticProperties } from "./plastic.js";
+export { plasticProperties, tryPlasticProperties } from "./plastic.js";
