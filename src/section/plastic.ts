@@ -1,6 +1,6 @@
 import { IssueCollector, attempt, type Result } from "../errors/index.js";
 import { ARC, STRIDE } from "./edges.js";
-import { addMoments, addMomentsAbove, chordAt, M_AREA, M_Y } from "./integrals.js";
+import { addMomentsAbove, chordAt, M_AREA, M_Y, M_Z } from "./integrals.js";
 import { prepareSection, type PreparedSection } from "./prepare.js";
 import { sectionProperties } from "./properties.js";
 import type { Section } from "./types.js";
@@ -29,29 +29,57 @@ export interface PlasticProperties {
   /** The yield strength shared by every solid part, or null when not given. */
   readonly yieldStrength: number | null;
   /** Plastic moments f_y Z_z and f_y Z_y (force times length), or null without a yield strength. */
-  readonly plasticMoment: { readonly z: number; readonly y: number } | null;
+  readonly plasticMoment: PlasticMoments | null;
+}
+
+/**
+ * Plastic moments of a section of one material with a yield strength.
+ *
+ * @example
+ * ```ts
+ * const m = plasticProperties(rectangle({ width: 10, depth: 20 }, { material: { elasticModulus: 200e3, yieldStrength: 355 } })).plasticMoment;
+ * ```
+ */
+export interface PlasticMoments {
+  /** f_y Z_z: bending about the horizontal axis (force times length). */
+  readonly z: number;
+  /** f_y Z_y: bending about the vertical axis (force times length). */
+  readonly y: number;
 }
 
 const above = new Float64Array(6);
-const whole = new Float64Array(6);
 
-function areaAbove(edges: Float64Array, p: PreparedSection, cut: number): number {
+/** Area (and \int y) above the cut; `box` holds each part's yMin, yMax at offsets 2 and 3 (stride 4), `moments` its own moments. */
+function areaAbove(edges: Float64Array, p: PreparedSection, box: Float64Array, moments: Float64Array, cut: number): number {
   above.fill(0);
-  for (let i = 0; i < p.count; i++) addMomentsAbove(above, edges, p.edgeStart[i]!, p.edgeStart[i + 1]!, p.sign[i]!, cut);
+  for (let i = 0; i < p.count; i++) {
+    const s = p.sign[i]!;
+    if (cut >= box[i * 4 + 3]!) continue;
+    if (cut <= box[i * 4 + 2]!) {
+      above[M_AREA]! += s * moments[i * 6 + M_AREA]!;
+      above[M_Y]! += s * moments[i * 6 + M_Y]!;
+    } else addMomentsAbove(above, edges, p.edgeStart[i]!, p.edgeStart[i + 1]!, s, cut);
+  }
   return above[M_AREA]!;
 }
 
-function widthAt(edges: Float64Array, p: PreparedSection, cut: number): number {
+function widthAt(edges: Float64Array, p: PreparedSection, box: Float64Array, cut: number): number {
   let b = 0;
-  for (let i = 0; i < p.count; i++) b += p.sign[i]! * chordAt(edges, p.edgeStart[i]!, p.edgeStart[i + 1]!, cut, true);
+  for (let i = 0; i < p.count; i++) {
+    if (cut < box[i * 4 + 2]! || cut > box[i * 4 + 3]!) continue;
+    b += p.sign[i]! * chordAt(edges, p.edgeStart[i]!, p.edgeStart[i + 1]!, cut, true);
+  }
   return b;
 }
 
 /** The plastic neutral axis (local y) and plastic modulus for bending about the local horizontal axis. */
-function plasticAboutHorizontal(edges: Float64Array, p: PreparedSection, yMin: number, yMax: number): { axis: number; modulus: number } {
-  whole.fill(0);
-  for (let i = 0; i < p.count; i++) addMoments(whole, edges, p.edgeStart[i]!, p.edgeStart[i + 1]!, p.sign[i]!);
-  const area = whole[M_AREA]!;
+function plasticAboutHorizontal(edges: Float64Array, p: PreparedSection, box: Float64Array, moments: Float64Array, yMin: number, yMax: number): { axis: number; modulus: number } {
+  let area = 0;
+  let firstMoment = 0;
+  for (let i = 0; i < p.count; i++) {
+    area += p.sign[i]! * moments[i * 6 + M_AREA]!;
+    firstMoment += p.sign[i]! * moments[i * 6 + M_Y]!;
+  }
   const half = area / 2;
   let lo = yMin;
   let hi = yMax;
@@ -59,18 +87,18 @@ function plasticAboutHorizontal(edges: Float64Array, p: PreparedSection, yMin: n
   const span = yMax - yMin;
   // Newton on A_above(c) = A / 2 (its derivative is minus the width), kept inside a bracket
   for (let iter = 0; iter < 200; iter++) {
-    const f = areaAbove(edges, p, c) - half;
+    const f = areaAbove(edges, p, box, moments, c) - half;
     if (f > 0) lo = c;
     else hi = c;
     if (Math.abs(f) <= 1e-15 * area || hi - lo <= 1e-15 * span) break;
-    const b = widthAt(edges, p, c);
+    const b = widthAt(edges, p, box, c);
     let next = b > 0 ? c + f / b : Number.NaN;
     if (!(next > lo && next < hi)) next = (lo + hi) / 2;
     c = next;
   }
-  const aAbove = areaAbove(edges, p, c);
+  const aAbove = areaAbove(edges, p, box, moments, c);
   const myAbove = above[M_Y]!;
-  const myBelow = whole[M_Y]! - myAbove;
+  const myBelow = firstMoment - myAbove;
   const aBelow = area - aAbove;
   return { axis: c, modulus: myAbove - c * aAbove + (c * aBelow - myBelow) };
 }
@@ -136,8 +164,19 @@ export function plasticProperties(section: Section): PlasticProperties {
   }
   found.throwIfAny();
   const b = p.box;
-  const aboutZ = plasticAboutHorizontal(p.edges, p, b[2]!, b[3]!);
-  const aboutY = plasticAboutHorizontal(quarterTurn(p.edges), p, b[0]!, b[1]!);
+  const aboutZ = plasticAboutHorizontal(p.edges, p, p.partBox, p.partMoments, b[2]!, b[3]!);
+  // a quarter turn (z, y) -> (-y, z) makes vertical cuts horizontal: boxes and moments follow
+  const turnedBox = new Float64Array(p.count * 4);
+  const turnedMoments = new Float64Array(p.count * 6);
+  for (let i = 0; i < p.count; i++) {
+    turnedBox[i * 4] = -p.partBox[i * 4 + 3]!;
+    turnedBox[i * 4 + 1] = -p.partBox[i * 4 + 2]!;
+    turnedBox[i * 4 + 2] = p.partBox[i * 4]!;
+    turnedBox[i * 4 + 3] = p.partBox[i * 4 + 1]!;
+    turnedMoments[i * 6 + M_AREA] = p.partMoments[i * 6 + M_AREA]!;
+    turnedMoments[i * 6 + M_Y] = p.partMoments[i * 6 + M_Z]!;
+  }
+  const aboutY = plasticAboutHorizontal(quarterTurn(p.edges), p, turnedBox, turnedMoments, b[0]!, b[1]!);
   const elastic = sectionProperties(section);
   const zz = aboutZ.modulus;
   const zy = aboutY.modulus;
