@@ -89,7 +89,7 @@ const doublySymmetric = fc.oneof(
       flangeWidth: fc.double({ min: 20, max: 400, noNaN: true }),
       tf: fc.double({ min: 0.01, max: 0.45, noNaN: true }),
       tw: fc.double({ min: 0.01, max: 1, noNaN: true }),
-      r: fc.double({ min: 0, max: 1, noNaN: true }),
+      r: fc.double({ min: 0, max: 0.99, noNaN: true }),
     })
     .map(({ depth, flangeWidth, tf, tw, r }) => {
       const flangeThickness = tf * depth;
