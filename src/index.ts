@@ -7,3 +7,4 @@
  * @packageDocumentation
  */
 export * from "./errors/index.js";
+export * from "./model/index.js";

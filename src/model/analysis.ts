@@ -1,0 +1,188 @@
+import type { Model, ModelUnits } from "./model.js";
+
+/**
+ * The results of `analyzeModel`, every value in the model's own {@link ModelUnits}
+ * (repeated in `units` so that a reader of the JSON form knows them).
+ *
+ * Sign conventions: x from the left end; reactions positive upward (force) and counterclockwise
+ * (moment); bending moment positive when sagging; shear V = dM/dx; slope positive
+ * counterclockwise; deflection positive upward; stress positive in tension.
+ */
+
+/** An extreme value and where it occurs. */
+export interface ModelExtreme {
+  /** The value, in the unit of the quantity. */
+  readonly value: number;
+  /** Where it occurs, in the length unit from the left end. */
+  readonly at: number;
+}
+
+/** The largest and smallest values of a quantity along the member. */
+export interface ModelPeaks {
+  /** The largest (most positive) value and its position. */
+  readonly max: ModelExtreme;
+  /** The smallest (most negative) value and its position. */
+  readonly min: ModelExtreme;
+}
+
+/** The reaction at one support. */
+export interface ModelReaction {
+  /** Index of the support in `model.supports`. */
+  readonly support: number;
+  /** The support's kind. */
+  readonly kind: "pin" | "roller" | "fixed" | "guided" | "spring";
+  /** Position, in the length unit. */
+  readonly at: number;
+  /** Force, positive upward, in the force unit (0 where deflection is free). */
+  readonly force: number;
+  /** Moment, positive counterclockwise, in the moment unit (0 where rotation is free). */
+  readonly moment: number;
+}
+
+/**
+ * One polynomial piece of a diagram: on `from <= x <= to` (length unit) the value is
+ * `sum coefficients[k] * (x - from)^k`, in the quantity's unit.
+ */
+export interface ModelDiagramPiece {
+  /** Start of the piece, in the length unit. */
+  readonly from: number;
+  /** End of the piece, in the length unit. */
+  readonly to: number;
+  /** Coefficients in powers of (x - from), lowest first; x in the length unit. */
+  readonly coefficients: readonly number[];
+}
+
+/** A quantity along the member as exact polynomial pieces, in the model's units. */
+export interface ModelDiagram {
+  /** The unit of the values. */
+  readonly unit: string;
+  /** Contiguous pieces from 0 to the member length, in order. */
+  readonly pieces: readonly ModelDiagramPiece[];
+}
+
+/** Shear, moment, slope and deflection along the member, for plotting. */
+export interface ModelDiagrams {
+  /** Shear force, in the force unit. */
+  readonly shear: ModelDiagram;
+  /** Bending moment, positive sagging, in the moment unit. */
+  readonly moment: ModelDiagram;
+  /** Slope, positive counterclockwise, in the rotation unit. */
+  readonly slope: ModelDiagram;
+  /** Deflection, positive upward, in the deflection unit. */
+  readonly deflection: ModelDiagram;
+}
+
+/** Properties of the model's cross-section, in the section units. */
+export interface ModelSectionResult {
+  /** The shape name from the model file. */
+  readonly shape: string;
+  /** Area, in the area unit. */
+  readonly area: number;
+  /** Centroid, in the section-length unit, in the shape's own coordinates (y up, z horizontal). */
+  readonly centroid: {
+    /** Vertical position of the centroid. */
+    readonly y: number;
+    /** Horizontal position of the centroid. */
+    readonly z: number;
+  };
+  /** Second moment about the horizontal centroidal axis (bending axis), in the second-moment unit. */
+  readonly secondMomentZ: number;
+  /** Second moment about the vertical centroidal axis, in the second-moment unit. */
+  readonly secondMomentY: number;
+  /** Product moment of area about the centroidal axes, in the second-moment unit. */
+  readonly productMomentYZ: number;
+  /** Elastic section modulus to the top fibre, I_z / y_top, in the section-modulus unit. */
+  readonly sectionModulusTop: number;
+  /** Elastic section modulus to the bottom fibre, I_z / y_bottom, in the section-modulus unit. */
+  readonly sectionModulusBottom: number;
+  /** Distance from the centroid up to the top fibre, in the section-length unit. */
+  readonly yTop: number;
+  /** Distance from the centroid down to the bottom fibre (positive), in the section-length unit. */
+  readonly yBottom: number;
+}
+
+/** The extreme bending stress and where it occurs, along the member and across the section. */
+export interface ModelStressExtreme {
+  /** Stress, positive in tension, in the stress unit. */
+  readonly value: number;
+  /** Position along the member, in the length unit. */
+  readonly at: number;
+  /** Fibre height above the centroid (negative below), in the section-length unit. */
+  readonly y: number;
+}
+
+/** The largest tensile and compressive bending stress on the member. */
+export interface ModelStress {
+  /** Largest tension (a value >= 0). */
+  readonly tension: ModelStressExtreme;
+  /** Largest compression (a value <= 0). */
+  readonly compression: ModelStressExtreme;
+  /** Largest shear stress magnitude, when the section allows it to be computed. */
+  readonly shear?: ModelExtreme;
+}
+
+/** One check of the member against a limit of the model. */
+export interface ModelCheck {
+  /** What is checked. */
+  readonly kind: "deflection" | "bending-stress" | "shear-stress";
+  /** The demand (a magnitude), in `unit`. */
+  readonly demand: number;
+  /** The limit (a magnitude), in `unit`. */
+  readonly capacity: number;
+  /** demand / capacity; at most 1 to pass. */
+  readonly utilisation: number;
+  /** True when the demand does not exceed the capacity. */
+  readonly pass: boolean;
+  /** Where the demand occurs, in the length unit. */
+  readonly at: number;
+  /** The unit of `demand` and `capacity`. */
+  readonly unit: string;
+  /** A short plain description, such as "deflection of span 1 (0 to 4 m) against span/360". */
+  readonly description: string;
+}
+
+/** A caution about the model or its results that does not stop the analysis. */
+export interface ModelWarning {
+  /** Stable kebab-case code. */
+  readonly code: string;
+  /** Plain description. */
+  readonly message: string;
+}
+
+/**
+ * For each kind of quantity, how many SI base units one model unit holds:
+ * `valueSI = valueInModelUnits * scale[kind]` (for example 1000 for a force in kN).
+ */
+export type ModelScale = { readonly [K in keyof ModelUnits]: number };
+
+/** Everything `analyzeModel` found, in the model's units. */
+export interface ModelAnalysis {
+  /** The model that was analysed. */
+  readonly model: Model;
+  /** The units of every value below. */
+  readonly units: ModelUnits;
+  /** SI base units per model unit, for each kind of quantity. */
+  readonly scale: ModelScale;
+  /** Reactions, in the order of `model.supports`. */
+  readonly reactions: readonly ModelReaction[];
+  /** Shear force peaks, in the force unit. */
+  readonly shear: ModelPeaks;
+  /** Bending moment peaks (positive sagging), in the moment unit. */
+  readonly moment: ModelPeaks;
+  /** Slope peaks (positive counterclockwise), in the rotation unit. */
+  readonly slope: ModelPeaks;
+  /** Deflection peaks (positive upward), in the deflection unit. */
+  readonly deflection: ModelPeaks;
+  /** Section properties, when the model has a section. */
+  readonly section?: ModelSectionResult;
+  /** Extreme bending stresses, when the model has a section. */
+  readonly stress?: ModelStress;
+  /** Checks against the model's limits (those that could be evaluated). */
+  readonly checks: readonly ModelCheck[];
+  /** True when every check passes (true when there are none). */
+  readonly pass: boolean;
+  /** Shear, moment, slope and deflection along the member, for plotting. */
+  readonly diagrams: ModelDiagrams;
+  /** Cautions about the model or its results. */
+  readonly warnings: readonly ModelWarning[];
+}

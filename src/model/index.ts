@@ -1,0 +1,31 @@
+export type {
+  Model,
+  ModelUnits,
+  ModelQuantityKind,
+  ModelSupport,
+  ModelPointLoad,
+  ModelCoupleLoad,
+  ModelDistributedLoad,
+  ModelLoad,
+  ModelSegment,
+  ModelDeflectionLimit,
+  ModelLimits,
+  ModelMaterial,
+  ModelSection,
+} from "./model.js";
+export { MODEL_FORMAT_VERSION } from "./model.js";
+export type {
+  ModelAnalysis,
+  ModelExtreme,
+  ModelPeaks,
+  ModelReaction,
+  ModelDiagram,
+  ModelDiagramPiece,
+  ModelDiagrams,
+  ModelSectionResult,
+  ModelStress,
+  ModelStressExtreme,
+  ModelCheck,
+  ModelWarning,
+  ModelScale,
+} from "./analysis.js";
