@@ -9,7 +9,7 @@
  * @example
  * ```ts
  * formatNumber(123.456);    // "123.5"
- * formatNumber(0.000012345); // "1.235e-5"
+ * formatNumber(0.0000123456); // "1.235e-5"
  * formatNumber(-0);          // "0"
  * ```
  */

@@ -84,7 +84,10 @@ export function lineDiagramSvg(data: LineDiagramData, options: LineDiagramOption
     parts.push(svgPolyline(drawn, { fill: "none", stroke: colour, "stroke-width": 2, "stroke-linejoin": "round" }));
   }
   parts.push(svgElement("line", { x1: plot.x0, y1: sy(0), x2: plot.x1, y2: sy(0), stroke: "#222", "stroke-width": 1.2 }));
-  for (const peak of data.peaks) parts.push(peakMark(peak, data, plot, sx, sy, colour));
+  // A zero peak (the unloaded end of a moment diagram, a support's deflection) says nothing; label it
+  // only when the whole diagram is zero.
+  const labelled = data.peaks.filter((p) => p.value !== 0 || (lo === -1 && hi === 1 && !points.some((q) => q[1] !== 0)));
+  for (const peak of labelled) parts.push(peakMark(peak, data, plot, sx, sy, colour));
   return svgDocument(width, height, data.title, parts.join(""));
 }
 

@@ -9,7 +9,7 @@ export interface MemberSvgOptions {
   readonly width?: number;
 }
 
-const HEIGHT = 330;
+const HEIGHT = 350;
 const BEAM_Y = 170;
 const LOAD_COLOUR = "#b3261e";
 const INK = "#222";
@@ -109,7 +109,7 @@ function pointOrCouple(load: DrawnLoad, member: MemberDrawing, sx: Scale, bigges
       return (
         svgElement("path", { d: path, fill: "none", stroke: LOAD_COLOUR, "stroke-width": 2 }) +
         svgPolygon(head as readonly (readonly [number, number])[], { fill: LOAD_COLOUR }) +
-        svgText(x, BEAM_Y + r + 44, label, { "text-anchor": "middle", fill: LOAD_COLOUR, "font-weight": "bold" })
+        svgText(x, BEAM_Y + r + 30, label, { "text-anchor": "middle", fill: LOAD_COLOUR, "font-weight": "bold" })
       );
     }
   }
@@ -187,7 +187,7 @@ function supportMark(support: DrawnSupport, length: number, x: number): string {
 }
 
 function dimensions(member: MemberDrawing, sx: Scale): string {
-  const y = BEAM_Y + 78;
+  const y = BEAM_Y + 95;
   const stations = [...new Set([0, member.length, ...member.supports.map((s) => s.at)])].sort((a, b) => a - b);
   const parts: string[] = [];
   const style = { stroke: "#555", "stroke-width": 1 };
