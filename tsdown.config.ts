@@ -4,16 +4,31 @@ import { defineConfig } from "tsdown";
 export const entries = {
   index: "src/index.ts",
   model: "src/model/index.ts",
+  report: "src/report/index.ts",
 } as const;
 
-export default defineConfig({
-  entry: entries,
-  format: ["esm", "cjs"],
-  dts: true,
-  sourcemap: false,
-  clean: true,
-  platform: "neutral",
-  target: "es2022",
-  outDir: "dist",
-  external: ["decimal.js"],
-});
+export default defineConfig([
+  {
+    entry: entries,
+    format: ["esm", "cjs"],
+    dts: true,
+    sourcemap: false,
+    clean: true,
+    platform: "neutral",
+    target: "es2022",
+    outDir: "dist",
+    external: ["decimal.js"],
+  },
+  // The `flexura` command: its own ESM bundle for Node (the only code that uses node: modules).
+  {
+    entry: { cli: "src/cli/main.ts" },
+    format: ["esm"],
+    dts: false,
+    sourcemap: false,
+    clean: false,
+    platform: "node",
+    target: "node20",
+    outDir: "dist",
+    external: ["decimal.js"],
+  },
+]);

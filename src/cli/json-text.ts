@@ -48,8 +48,11 @@ interface Failure {
   readonly message: string;
 }
 
-class Stop {
-  constructor(readonly failure: Failure) {}
+/** Thrown inside the scanner to unwind to its top at the first error; never escapes it. */
+class Stop extends Error {
+  constructor(readonly failure: Failure) {
+    super(failure.message);
+  }
 }
 
 /** A small recursive-descent JSON scanner that finds the first syntax error. */

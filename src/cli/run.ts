@@ -1,6 +1,6 @@
 import { formatPath, isFlexuraError, type FlexuraError } from "../errors/index.js";
 import { analysisToJson, analyzeModel, modelSchema, parseModel, type ModelAnalysis } from "../model/index.js";
-import { formatNumber, reportDiagrams, textReport } from "../report/index.js";
+import { formatReportNumber, reportDiagrams, textReport } from "../report/index.js";
 import { parseCommandLine } from "./args.js";
 import { EXIT, type ExitCode } from "./exit-codes.js";
 import { HELP } from "./help.js";
@@ -177,10 +177,10 @@ export function checkVerdict(file: string, analysis: ModelAnalysis): string {
   const failed = checks.filter((c) => !c.pass);
   let governing = checks[0];
   for (const c of checks) if (governing === undefined || c.utilisation > governing.utilisation) governing = c;
-  const gov = governing === undefined ? "" : `, governing utilisation ${formatNumber(governing.utilisation, 3)} (${governing.description})`;
+  const gov = governing === undefined ? "" : `, governing utilisation ${formatReportNumber(governing.utilisation, 3)} (${governing.description})`;
   if (failed.length === 0) return `PASS ${file}: ${checks.length} checks${gov}\n`;
   const lines = failed.map(
-    (c) => `  FAIL ${c.description}: ${formatNumber(c.demand)} ${c.unit} against ${formatNumber(c.capacity)} ${c.unit} (utilisation ${formatNumber(c.utilisation, 3)})`,
+    (c) => `  FAIL ${c.description}: ${formatReportNumber(c.demand)} ${c.unit} against ${formatReportNumber(c.capacity)} ${c.unit} (utilisation ${formatReportNumber(c.utilisation, 3)})`,
   );
   return `FAIL ${file}: ${failed.length} of ${checks.length} checks fail${gov}\n${lines.join("\n")}\n`;
 }

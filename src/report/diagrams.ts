@@ -1,5 +1,5 @@
 import type { ModelAnalysis, ModelDiagram, ModelPeaks } from "../model/index.js";
-import { formatQuantity } from "./format.js";
+import { formatReportQuantity } from "./format.js";
 import { lineDiagramSvg } from "./line-diagram.js";
 import type { DrawnLoad, MemberDrawing } from "./member-drawing.js";
 import { memberSvg } from "./member-svg.js";
@@ -126,6 +126,6 @@ function sectionDrawing(analysis: ModelAnalysis, name: string, outline: readonly
       [s.centroid.y + bottom, -curvature * bottom],
       [s.centroid.y + top, -curvature * top],
     ],
-    stressNote: `at x = ${formatQuantity(governing.at, u.length)}, M = ${formatQuantity(moment, u.moment)}`,
+    stressNote: `at x = ${formatReportQuantity(governing.at, u.length)}, M = ${formatReportQuantity(moment, u.moment)}`,
   };
 }

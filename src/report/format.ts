@@ -8,12 +8,12 @@
  * @param digits - Significant figures, 1 to 21.
  * @example
  * ```ts
- * formatNumber(123.456);    // "123.5"
- * formatNumber(0.0000123456); // "1.235e-5"
- * formatNumber(-0);          // "0"
+ * formatReportNumber(123.456);    // "123.5"
+ * formatReportNumber(0.0000123456); // "1.235e-5"
+ * formatReportNumber(-0);          // "0"
  * ```
  */
-export function formatNumber(value: number, digits = 4): string {
+export function formatReportNumber(value: number, digits = 4): string {
   if (!Number.isFinite(value)) return "not finite";
   if (value === 0) return "0";
   const p = Math.min(21, Math.max(1, Math.round(digits)));
@@ -39,11 +39,11 @@ function stripZeros(text: string): string {
  *
  * @example
  * ```ts
- * formatQuantity(12.5, "kN"); // "12.5 kN"
+ * formatReportQuantity(12.5, "kN"); // "12.5 kN"
  * ```
  */
-export function formatQuantity(value: number, unit: string, digits = 4): string {
-  const text = formatNumber(value, digits);
+export function formatReportQuantity(value: number, unit: string, digits = 4): string {
+  const text = formatReportNumber(value, digits);
   return unit === "" ? text : `${text} ${unit}`;
 }
 

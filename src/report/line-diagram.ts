@@ -1,4 +1,4 @@
-import { formatNumber } from "./format.js";
+import { formatReportNumber } from "./format.js";
 import { linearScale, niceTicks, valueExtent } from "./scale.js";
 import { svgDocument, svgElement, svgPolygon, svgPolyline, svgText } from "./svg.js";
 
@@ -110,12 +110,12 @@ function axes(
   for (const t of niceTicks(0, data.length, 8)) {
     const x = sx(t);
     parts.push(svgElement("line", { x1: x, y1: plot.y0, x2: x, y2: plot.y1, ...grid }));
-    parts.push(svgText(x, plot.y1 + 16, formatNumber(t), { "text-anchor": "middle", fill: "#444" }));
+    parts.push(svgText(x, plot.y1 + 16, formatReportNumber(t), { "text-anchor": "middle", fill: "#444" }));
   }
   for (const t of niceTicks(extent[0], extent[1], 5)) {
     const y = sy(t);
     parts.push(svgElement("line", { x1: plot.x0, y1: y, x2: plot.x1, y2: y, ...grid }));
-    parts.push(svgText(plot.x0 - 6, y + 4, formatNumber(t), { "text-anchor": "end", fill: "#444" }));
+    parts.push(svgText(plot.x0 - 6, y + 4, formatReportNumber(t), { "text-anchor": "end", fill: "#444" }));
   }
   parts.push(svgElement("rect", { x: plot.x0, y: plot.y0, width: plot.x1 - plot.x0, height: plot.y1 - plot.y0, fill: "none", stroke: "#888" }));
   parts.push(svgText((plot.x0 + plot.x1) / 2, plot.y1 + 36, `x (${data.lengthUnit})`, { "text-anchor": "middle" }));
@@ -135,7 +135,7 @@ function peakMark(
   if (!Number.isFinite(peak.at) || !Number.isFinite(peak.value)) return "";
   const x = sx(peak.at);
   const y = sy(peak.value);
-  const label = `${peak.name} ${formatNumber(peak.value)} ${data.valueUnit} at x = ${formatNumber(peak.at)} ${data.lengthUnit}`;
+  const label = `${peak.name} ${formatReportNumber(peak.value)} ${data.valueUnit} at x = ${formatReportNumber(peak.at)} ${data.lengthUnit}`;
   const below = peak.value < 0;
   const anchor = x < plot.x0 + 120 ? "start" : x > plot.x1 - 120 ? "end" : "middle";
   const ly = Math.min(plot.y1 - 4, Math.max(plot.y0 + 12, below ? y + 18 : y - 9));

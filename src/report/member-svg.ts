@@ -1,4 +1,4 @@
-import { formatNumber } from "./format.js";
+import { formatReportNumber } from "./format.js";
 import type { DrawnLoad, DrawnSupport, MemberDrawing } from "./member-drawing.js";
 import { linearScale } from "./scale.js";
 import { svgDocument, svgElement, svgPolygon, svgPolyline, svgText } from "./svg.js";
@@ -89,7 +89,7 @@ function pointOrCouple(load: DrawnLoad, member: MemberDrawing, sx: Scale, bigges
       const down = load.value >= 0;
       const yTip = down ? BEAM_Y - 5 : BEAM_Y - 5 - size;
       const yTail = down ? BEAM_Y - 5 - size : BEAM_Y - 5;
-      const label = `${formatNumber(Math.abs(load.value))} ${member.forceUnit}${down ? "" : " up"}`;
+      const label = `${formatReportNumber(Math.abs(load.value))} ${member.forceUnit}${down ? "" : " up"}`;
       return arrow(x, yTail, yTip) + svgText(x, BEAM_Y - size - 12, label, { "text-anchor": "middle", fill: LOAD_COLOUR, "font-weight": "bold" });
     }
     case "moment": {
@@ -105,7 +105,7 @@ function pointOrCouple(load: DrawnLoad, member: MemberDrawing, sx: Scale, bigges
       const head = ccw
         ? [to, [to[0] + 9, to[1] - 1], [to[0] + 3, to[1] - 8]]
         : [to, [to[0] - 9, to[1] - 1], [to[0] - 3, to[1] - 8]];
-      const label = `${formatNumber(Math.abs(load.value))} ${member.momentUnit} ${ccw ? "ccw" : "cw"}`;
+      const label = `${formatReportNumber(Math.abs(load.value))} ${member.momentUnit} ${ccw ? "ccw" : "cw"}`;
       return (
         svgElement("path", { d: path, fill: "none", stroke: LOAD_COLOUR, "stroke-width": 2 }) +
         svgPolygon(head as readonly (readonly [number, number])[], { fill: LOAD_COLOUR }) +
@@ -137,8 +137,8 @@ function distributedLoads(member: MemberDrawing, sx: Scale): string {
     }
     const same = l.start === l.end;
     const label = same
-      ? `${formatNumber(l.start)} ${member.distributedUnit}`
-      : `${formatNumber(l.start)} to ${formatNumber(l.end)} ${member.distributedUnit}`;
+      ? `${formatReportNumber(l.start)} ${member.distributedUnit}`
+      : `${formatReportNumber(l.start)} to ${formatReportNumber(l.end)} ${member.distributedUnit}`;
     parts.push(svgText((x0 + x1) / 2, Math.min(top0, top1) - 6, label, { "text-anchor": "middle", fill: LOAD_COLOUR }));
   }
   return parts.join("");
@@ -196,11 +196,11 @@ function dimensions(member: MemberDrawing, sx: Scale): string {
   for (let i = 1; i < stations.length; i++) {
     const a = stations[i - 1] ?? 0;
     const b = stations[i] ?? 0;
-    parts.push(svgText((sx(a) + sx(b)) / 2, y - 5, `${formatNumber(b - a)} ${member.lengthUnit}`, { "text-anchor": "middle", fill: "#333" }));
+    parts.push(svgText((sx(a) + sx(b)) / 2, y - 5, `${formatReportNumber(b - a)} ${member.lengthUnit}`, { "text-anchor": "middle", fill: "#333" }));
   }
   parts.push(svgElement("line", { x1: sx(0), y1: y + 28, x2: sx(member.length), y2: y + 28, ...style }));
   parts.push(svgElement("line", { x1: sx(0), y1: y + 22, x2: sx(0), y2: y + 34, ...style }));
   parts.push(svgElement("line", { x1: sx(member.length), y1: y + 22, x2: sx(member.length), y2: y + 34, ...style }));
-  parts.push(svgText((sx(0) + sx(member.length)) / 2, y + 23, `L = ${formatNumber(member.length)} ${member.lengthUnit}`, { "text-anchor": "middle", fill: "#333", "font-weight": "bold" }));
+  parts.push(svgText((sx(0) + sx(member.length)) / 2, y + 23, `L = ${formatReportNumber(member.length)} ${member.lengthUnit}`, { "text-anchor": "middle", fill: "#333", "font-weight": "bold" }));
   return parts.join("");
 }

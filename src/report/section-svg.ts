@@ -1,4 +1,4 @@
-import { formatNumber } from "./format.js";
+import { formatReportNumber } from "./format.js";
 import { linearScale, valueExtent } from "./scale.js";
 import { svgDocument, svgElement, svgPolygon, svgPolyline, svgText } from "./svg.js";
 
@@ -105,7 +105,7 @@ export function sectionSvg(section: SectionDrawing): string {
 function depthLabels(section: SectionDrawing, yMin: number, yMax: number, py: (y: number) => number, x: number): string {
   const c = section.centroid.y;
   const style = { stroke: "#555", "stroke-width": 1 };
-  const label = (v: number): string => `${formatNumber(v)} ${section.lengthUnit}`;
+  const label = (v: number): string => `${formatReportNumber(v)} ${section.lengthUnit}`;
   const parts = [
     svgElement("line", { x1: x, y1: py(yMax), x2: x, y2: py(yMin), ...style }),
     ...[yMax, c, yMin].map((y) => svgElement("line", { x1: x - 5, y1: py(y), x2: x + 5, y2: py(y), ...style })),
@@ -153,7 +153,7 @@ function stressProfile(section: SectionDrawing, py: (y: number) => number, yMin:
     const [y, s] = p;
     const above = p === last;
     parts.push(
-      svgText(sx(s), py(y) + (above ? -6 : 16), `${formatNumber(s)} ${section.stressUnit}`, {
+      svgText(sx(s), py(y) + (above ? -6 : 16), `${formatReportNumber(s)} ${section.stressUnit}`, {
         "text-anchor": s >= 0 ? "start" : "end",
         "font-weight": "bold",
         fill: s >= 0 ? TENSION : COMPRESSION,

@@ -1,5 +1,5 @@
 import type { Model, ModelLoad, ModelSupport } from "../model/index.js";
-import { formatNumber, formatQuantity, textTable } from "./format.js";
+import { formatReportNumber, formatReportQuantity, textTable } from "./format.js";
 
 /**
  * The inputs section of the text report: units, length, stiffness, section and material,
@@ -19,11 +19,11 @@ export function reportInputs(model: Model): string {
     `  Units: length ${u.length}, force ${u.force}, moment ${u.moment}, distributed load ${u.forcePerLength}, ` +
       `deflection ${u.deflection}, stress ${u.stress}, section ${u.sectionLength}`,
   );
-  out.push(`  Member length: ${formatQuantity(model.length, u.length)}`);
+  out.push(`  Member length: ${formatReportQuantity(model.length, u.length)}`);
   out.push(...stiffnessLines(model));
   out.push("", "  Supports:");
   out.push(indent(textTable([["#", "type", "at", "stiffness", "settlement"], ...model.supports.map((s, i) => supportRow(model, s, i))])));
-  if (model.hinges.length > 0) out.push("", `  Hinges at: ${model.hinges.map((h) => formatQuantity(h, u.length)).join(", ")}`);
+  if (model.hinges.length > 0) out.push("", `  Hinges at: ${model.hinges.map((h) => formatReportQuantity(h, u.length)).join(", ")}`);
   out.push("", "  Loads (forces positive downward, couples positive counterclockwise):");
   if (model.loads.length === 0) out.push("    none");
   else out.push(indent(textTable([["#", "type", "position", "value", "case"], ...model.loads.map((l, i) => loadRow(model, l, i))])));
@@ -41,8 +41,8 @@ function indent(text: string): string {
 function stiffnessLines(model: Model): string[] {
   const u = model.units;
   const lines: string[] = [];
-  if (model.E !== undefined) lines.push(`  Modulus of elasticity E: ${formatQuantity(model.E, u.modulus)}`);
-  if (model.I !== undefined) lines.push(`  Second moment of area I: ${formatQuantity(model.I, u.secondMoment)}`);
+  if (model.E !== undefined) lines.push(`  Modulus of elasticity E: ${formatReportQuantity(model.E, u.modulus)}`);
+  if (model.I !== undefined) lines.push(`  Second moment of area I: ${formatReportQuantity(model.I, u.secondMoment)}`);
   if (model.segments !== undefined && model.segments.length > 0) {
     lines.push("  Segments of constant stiffness:");
     lines.push(
@@ -50,10 +50,10 @@ function stiffnessLines(model: Model): string[] {
         textTable([
           ["from", "to", "E", "I"],
           ...model.segments.map((s) => [
-            formatQuantity(s.from, u.length),
-            formatQuantity(s.to, u.length),
-            formatQuantity(s.E, u.modulus),
-            formatQuantity(s.I, u.secondMoment),
+            formatReportQuantity(s.from, u.length),
+            formatReportQuantity(s.to, u.length),
+            formatReportQuantity(s.E, u.modulus),
+            formatReportQuantity(s.I, u.secondMoment),
           ]),
         ]),
       ),
@@ -61,15 +61,15 @@ function stiffnessLines(model: Model): string[] {
   }
   if (model.section !== undefined) {
     const dims = Object.entries(model.section.dimensions)
-      .map(([k, v]) => `${k} ${formatQuantity(v, u.sectionLength)}`)
+      .map(([k, v]) => `${k} ${formatReportQuantity(v, u.sectionLength)}`)
       .join(", ");
     lines.push(`  Section: ${model.section.shape}${dims === "" ? "" : ` (${dims})`}`);
   }
   if (model.material !== undefined) {
     const m = model.material;
     const name = m.name === undefined ? "" : `${m.name}, `;
-    const fy = m.yieldStrength === undefined ? "" : `, yield strength ${formatQuantity(m.yieldStrength, u.stress)}`;
-    lines.push(`  Material: ${name}E ${formatQuantity(m.E, u.modulus)}${fy}`);
+    const fy = m.yieldStrength === undefined ? "" : `, yield strength ${formatReportQuantity(m.yieldStrength, u.stress)}`;
+    lines.push(`  Material: ${name}E ${formatReportQuantity(m.E, u.modulus)}${fy}`);
   }
   return lines;
 }
@@ -77,12 +77,12 @@ function stiffnessLines(model: Model): string[] {
 function supportRow(model: Model, s: ModelSupport, i: number): string[] {
   const u = model.units;
   const stiffness: string[] = [];
-  if (s.stiffness !== undefined) stiffness.push(formatQuantity(s.stiffness, u.translationalStiffness));
-  if (s.rotationalStiffness !== undefined) stiffness.push(formatQuantity(s.rotationalStiffness, u.rotationalStiffness));
+  if (s.stiffness !== undefined) stiffness.push(formatReportQuantity(s.stiffness, u.translationalStiffness));
+  if (s.rotationalStiffness !== undefined) stiffness.push(formatReportQuantity(s.rotationalStiffness, u.rotationalStiffness));
   const settlement: string[] = [];
-  if (s.settlement !== undefined) settlement.push(`${formatQuantity(s.settlement, u.deflection)} down`);
-  if (s.rotation !== undefined) settlement.push(`rotation ${formatQuantity(s.rotation, u.rotation)}`);
-  return [String(i + 1), s.kind, formatQuantity(s.at, u.length), stiffness.join(", ") || "-", settlement.join(", ") || "-"];
+  if (s.settlement !== undefined) settlement.push(`${formatReportQuantity(s.settlement, u.deflection)} down`);
+  if (s.rotation !== undefined) settlement.push(`rotation ${formatReportQuantity(s.rotation, u.rotation)}`);
+  return [String(i + 1), s.kind, formatReportQuantity(s.at, u.length), stiffness.join(", ") || "-", settlement.join(", ") || "-"];
 }
 
 function loadRow(model: Model, l: ModelLoad, i: number): string[] {
@@ -91,15 +91,15 @@ function loadRow(model: Model, l: ModelLoad, i: number): string[] {
   const c = l.case ?? "-";
   switch (l.kind) {
     case "point":
-      return [n, "point", `at ${formatQuantity(l.at, u.length)}`, formatQuantity(l.value, u.force), c];
+      return [n, "point", `at ${formatReportQuantity(l.at, u.length)}`, formatReportQuantity(l.value, u.force), c];
     case "couple":
-      return [n, "couple", `at ${formatQuantity(l.at, u.length)}`, formatQuantity(l.value, u.moment), c];
+      return [n, "couple", `at ${formatReportQuantity(l.at, u.length)}`, formatReportQuantity(l.value, u.moment), c];
     case "distributed": {
       const value =
         l.start === l.end
-          ? formatQuantity(l.start, u.forcePerLength)
-          : `${formatNumber(l.start)} to ${formatQuantity(l.end, u.forcePerLength)}`;
-      return [n, "distributed", `${formatNumber(l.from)} to ${formatQuantity(l.to, u.length)}`, value, c];
+          ? formatReportQuantity(l.start, u.forcePerLength)
+          : `${formatReportNumber(l.start)} to ${formatReportQuantity(l.end, u.forcePerLength)}`;
+      return [n, "distributed", `${formatReportNumber(l.from)} to ${formatReportQuantity(l.to, u.length)}`, value, c];
     }
   }
 }
@@ -111,14 +111,14 @@ function limitsLine(model: Model): string {
   if (d !== undefined) {
     switch (d.kind) {
       case "ratio":
-        parts.push(`deflection span/${formatNumber(d.ratio)}`);
+        parts.push(`deflection span/${formatReportNumber(d.ratio)}`);
         break;
       case "length":
-        parts.push(`deflection ${formatQuantity(d.value, u.deflection)}`);
+        parts.push(`deflection ${formatReportQuantity(d.value, u.deflection)}`);
         break;
     }
   }
-  if (model.limits.bendingStress !== undefined) parts.push(`bending stress ${formatQuantity(model.limits.bendingStress, u.stress)}`);
-  if (model.limits.shearStress !== undefined) parts.push(`shear stress ${formatQuantity(model.limits.shearStress, u.stress)}`);
+  if (model.limits.bendingStress !== undefined) parts.push(`bending stress ${formatReportQuantity(model.limits.bendingStress, u.stress)}`);
+  if (model.limits.shearStress !== undefined) parts.push(`shear stress ${formatReportQuantity(model.limits.shearStress, u.stress)}`);
   return parts.length === 0 ? "none given" : parts.join("; ");
 }

@@ -1,5 +1,5 @@
 import type { ModelAnalysis, ModelPeaks } from "../model/index.js";
-import { formatNumber, formatQuantity, textTable } from "./format.js";
+import { formatReportNumber, formatReportQuantity, textTable } from "./format.js";
 
 function indent(text: string): string {
   return text
@@ -29,22 +29,22 @@ export function reportForces(analysis: ModelAnalysis): string {
         ...analysis.reactions.map((r) => [
           String(r.support + 1),
           r.kind,
-          formatQuantity(r.at, u.length),
-          formatQuantity(r.force, u.force),
-          formatQuantity(r.moment, u.moment),
+          formatReportQuantity(r.at, u.length),
+          formatReportQuantity(r.force, u.force),
+          formatReportQuantity(r.moment, u.moment),
         ]),
       ]),
     ),
   );
   const sumUp = analysis.reactions.reduce((s, r) => s + r.force, 0);
-  out.push(`  Sum of vertical reactions: ${formatQuantity(sumUp, u.force)} upward`);
+  out.push(`  Sum of vertical reactions: ${formatReportQuantity(sumUp, u.force)} upward`);
   out.push("", "PEAKS ALONG THE MEMBER", "");
   const row = (name: string, p: ModelPeaks, unit: string): string[] => [
     name,
-    formatQuantity(p.max.value, unit),
-    `x = ${formatQuantity(p.max.at, u.length)}`,
-    formatQuantity(p.min.value, unit),
-    `x = ${formatQuantity(p.min.at, u.length)}`,
+    formatReportQuantity(p.max.value, unit),
+    `x = ${formatReportQuantity(p.max.at, u.length)}`,
+    formatReportQuantity(p.min.value, unit),
+    `x = ${formatReportQuantity(p.min.at, u.length)}`,
   ];
   out.push(
     indent(
@@ -58,7 +58,7 @@ export function reportForces(analysis: ModelAnalysis): string {
     ),
   );
   const down = analysis.deflection.min;
-  if (down.value < 0) out.push(`  Largest downward deflection: ${formatQuantity(-down.value, u.deflection)} at x = ${formatQuantity(down.at, u.length)}`);
+  if (down.value < 0) out.push(`  Largest downward deflection: ${formatReportQuantity(-down.value, u.deflection)} at x = ${formatReportQuantity(down.at, u.length)}`);
   return out.join("\n");
 }
 
@@ -82,29 +82,29 @@ export function reportSection(analysis: ModelAnalysis): string {
     indent(
       textTable([
         ["property", "value"],
-        ["area A", formatQuantity(s.area, u.area)],
-        ["centroid y", formatQuantity(s.centroid.y, u.sectionLength)],
-        ["centroid z", formatQuantity(s.centroid.z, u.sectionLength)],
-        ["second moment I_z (bending axis)", formatQuantity(s.secondMomentZ, u.secondMoment)],
-        ["second moment I_y", formatQuantity(s.secondMomentY, u.secondMoment)],
-        ["product moment I_yz", formatQuantity(s.productMomentYZ, u.secondMoment)],
-        ["centroid to top fibre", formatQuantity(s.yTop, u.sectionLength)],
-        ["centroid to bottom fibre", formatQuantity(s.yBottom, u.sectionLength)],
-        ["section modulus, top", formatQuantity(s.sectionModulusTop, u.sectionModulus)],
-        ["section modulus, bottom", formatQuantity(s.sectionModulusBottom, u.sectionModulus)],
+        ["area A", formatReportQuantity(s.area, u.area)],
+        ["centroid y", formatReportQuantity(s.centroid.y, u.sectionLength)],
+        ["centroid z", formatReportQuantity(s.centroid.z, u.sectionLength)],
+        ["second moment I_z (bending axis)", formatReportQuantity(s.secondMomentZ, u.secondMoment)],
+        ["second moment I_y", formatReportQuantity(s.secondMomentY, u.secondMoment)],
+        ["product moment I_yz", formatReportQuantity(s.productMomentYZ, u.secondMoment)],
+        ["centroid to top fibre", formatReportQuantity(s.yTop, u.sectionLength)],
+        ["centroid to bottom fibre", formatReportQuantity(s.yBottom, u.sectionLength)],
+        ["section modulus, top", formatReportQuantity(s.sectionModulusTop, u.sectionModulus)],
+        ["section modulus, bottom", formatReportQuantity(s.sectionModulusBottom, u.sectionModulus)],
       ]),
     ),
   );
   const st = analysis.stress;
   if (st !== undefined) {
     out.push("", "BENDING STRESS (sigma = -M y / I_z, tension positive)", "");
-    const where = (at: number, y: number): string => `x = ${formatQuantity(at, u.length)}, y = ${formatQuantity(y, u.sectionLength)}`;
+    const where = (at: number, y: number): string => `x = ${formatReportQuantity(at, u.length)}, y = ${formatReportQuantity(y, u.sectionLength)}`;
     const rows = [
       ["", "stress", "where"],
-      ["largest tension", formatQuantity(st.tension.value, u.stress), where(st.tension.at, st.tension.y)],
-      ["largest compression", formatQuantity(st.compression.value, u.stress), where(st.compression.at, st.compression.y)],
+      ["largest tension", formatReportQuantity(st.tension.value, u.stress), where(st.tension.at, st.tension.y)],
+      ["largest compression", formatReportQuantity(st.compression.value, u.stress), where(st.compression.at, st.compression.y)],
     ];
-    if (st.shear !== undefined) rows.push(["largest shear stress", formatQuantity(st.shear.value, u.stress), `x = ${formatQuantity(st.shear.at, u.length)}`]);
+    if (st.shear !== undefined) rows.push(["largest shear stress", formatReportQuantity(st.shear.value, u.stress), `x = ${formatReportQuantity(st.shear.at, u.length)}`]);
     out.push(indent(textTable(rows)));
   }
   return out.join("\n");
@@ -131,9 +131,9 @@ export function reportChecks(analysis: ModelAnalysis): string {
           ["check", "demand", "limit", "utilisation", "result"],
           ...analysis.checks.map((c) => [
             c.description,
-            formatQuantity(c.demand, c.unit),
-            formatQuantity(c.capacity, c.unit),
-            formatNumber(c.utilisation, 3),
+            formatReportQuantity(c.demand, c.unit),
+            formatReportQuantity(c.capacity, c.unit),
+            formatReportNumber(c.utilisation, 3),
             c.pass ? "PASS" : "FAIL",
           ]),
         ]),

@@ -1,6 +1,7 @@
 import { fc, test } from "@fast-check/vitest";
 import { describe, expect } from "vitest";
-import { diagramValueAt, evaluatePolynomial, sampleDiagram } from "../../src/report/index.js";
+import { diagramValueAt, sampleDiagram } from "../../src/report/index.js";
+import { evaluatePolynomial } from "../../src/report/sample.js";
 
 // Shear under a point load P = 10 at midspan of a 4 m simple span: +5 then -5
 // (AISC Steel Construction Manual 15th ed., Table 3-23 case 7).

@@ -1,6 +1,8 @@
 import { fc, test } from "@fast-check/vitest";
 import { describe, expect } from "vitest";
-import { formatNumber, formatQuantity, linearScale, niceTicks, textTable, valueExtent, wrapText } from "../../src/report/index.js";
+import { formatReportNumber, formatReportQuantity, textTable } from "../../src/report/index.js";
+import { wrapText } from "../../src/report/caution.js";
+import { linearScale, niceTicks, valueExtent } from "../../src/report/scale.js";
 
 describe("linearScale", () => {
   test("linearScale maps the ends of the domain to the ends of the range", () => {
@@ -48,31 +50,31 @@ describe("niceTicks", () => {
   });
 });
 
-describe("formatNumber", () => {
-  test("formatNumber writes four significant figures without trailing zeros", () => {
-    expect(formatNumber(123.456)).toBe("123.5");
-    expect(formatNumber(45)).toBe("45");
-    expect(formatNumber(0.1 + 0.2)).toBe("0.3");
-    expect(formatNumber(-0)).toBe("0");
-    expect(formatNumber(8.4375, 3)).toBe("8.44");
-    expect(formatNumber(1234, 1)).toBe("1000");
+describe("formatReportNumber", () => {
+  test("formatReportNumber writes four significant figures without trailing zeros", () => {
+    expect(formatReportNumber(123.456)).toBe("123.5");
+    expect(formatReportNumber(45)).toBe("45");
+    expect(formatReportNumber(0.1 + 0.2)).toBe("0.3");
+    expect(formatReportNumber(-0)).toBe("0");
+    expect(formatReportNumber(8.4375, 3)).toBe("8.44");
+    expect(formatReportNumber(1234, 1)).toBe("1000");
   });
-  test("formatNumber switches to exponent form for very large and very small magnitudes", () => {
-    expect(formatNumber(225e6)).toBe("2.25e8");
-    expect(formatNumber(0.0000123456)).toBe("1.235e-5");
-    expect(formatNumber(-1.5e-4)).toBe("-1.5e-4");
+  test("formatReportNumber switches to exponent form for very large and very small magnitudes", () => {
+    expect(formatReportNumber(225e6)).toBe("2.25e8");
+    expect(formatReportNumber(0.0000123456)).toBe("1.235e-5");
+    expect(formatReportNumber(-1.5e-4)).toBe("-1.5e-4");
   });
-  test("formatNumber never lets a non-finite value pass as a number", () => {
-    expect(formatNumber(Number.NaN)).toBe("not finite");
-    expect(formatNumber(Number.POSITIVE_INFINITY)).toBe("not finite");
+  test("formatReportNumber never lets a non-finite value pass as a number", () => {
+    expect(formatReportNumber(Number.NaN)).toBe("not finite");
+    expect(formatReportNumber(Number.POSITIVE_INFINITY)).toBe("not finite");
   });
-  test.prop([fc.double({ noNaN: true, noDefaultInfinity: true, min: -1e12, max: 1e12 })])("formatNumber reads back within four significant figures", (v) => {
-    const back = Number(formatNumber(v));
+  test.prop([fc.double({ noNaN: true, noDefaultInfinity: true, min: -1e12, max: 1e12 })])("formatReportNumber reads back within four significant figures", (v) => {
+    const back = Number(formatReportNumber(v));
     expect(Math.abs(back - v)).toBeLessThanOrEqual(Math.abs(v) * 5e-4 + 1e-300);
   });
-  test("formatQuantity puts a space between number and unit (NIST SP 811 (2008) section 7.2)", () => {
-    expect(formatQuantity(12.5, "kN")).toBe("12.5 kN");
-    expect(formatQuantity(12.5, "")).toBe("12.5");
+  test("formatReportQuantity puts a space between number and unit (NIST SP 811 (2008) section 7.2)", () => {
+    expect(formatReportQuantity(12.5, "kN")).toBe("12.5 kN");
+    expect(formatReportQuantity(12.5, "")).toBe("12.5");
   });
 });
 
