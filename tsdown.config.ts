@@ -5,6 +5,7 @@ export const entries = {
   index: "src/index.ts",
   model: "src/model/index.ts",
   report: "src/report/index.ts",
+  stress: "src/stress/index.ts",
 } as const;
 
 export default defineConfig([

@@ -9,3 +9,4 @@
 export * from "./errors/index.js";
 export * from "./model/index.js";
 export * from "./report/index.js";
+export * from "./stress/index.js";
