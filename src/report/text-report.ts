@@ -28,7 +28,7 @@ export function textReport(analysis: ModelAnalysis, options: TextReportOptions =
   const width = Math.max(40, options.width ?? 96);
   const model = analysis.model;
   const title = `flexura report: ${model.name ?? "unnamed member"}`;
-  const parts: string[] = [title, "=".repeat(Math.min(width, title.length))];
+  const parts: string[] = [`${title}\n${"=".repeat(Math.min(width, title.length))}`];
   if (model.description !== undefined) parts.push(wrapText(model.description, width));
   parts.push(wrapText(REPORT_CAUTION, width));
   parts.push(reportInputs(model), reportForces(analysis));

@@ -41,3 +41,13 @@ describe("parseCommandLine", () => {
     expect(parseCommandLine(["schema", "--json"])).toMatchObject({ kind: "usage-error", topic: "schema" });
   });
 });
+
+describe("help and exit codes", () => {
+  test("HELP documents every command and every exit code of EXIT", async () => {
+    const { HELP } = await import("../../src/cli/help.js");
+    const { EXIT } = await import("../../src/cli/exit-codes.js");
+    for (const command of ["analyze", "check", "schema"]) expect(HELP.main).toContain(`flexura ${command}`);
+    for (const code of Object.values(EXIT)) expect(HELP.main).toMatch(new RegExp(`^ {2}${code} {2}\\S`, "m"));
+    expect(new Set(Object.values(EXIT)).size).toBe(Object.values(EXIT).length);
+  });
+});
