@@ -23,7 +23,12 @@ export interface SectionDrawing {
   /** Outlines of solids and holes. */
   readonly parts: readonly DrawnSectionPart[];
   /** The elastic centroid (of the transformed section when materials differ), `y` up and `z` across. */
-  readonly centroid: { readonly y: number; readonly z: number };
+  readonly centroid: {
+    /** Height of the centroid, in the length unit. */
+    readonly y: number;
+    /** Horizontal position of the centroid, in the length unit. */
+    readonly z: number;
+  };
   /**
    * The bending-stress profile over the depth as points `[y, stress]` in order of y (two points
    * at the same y draw a jump, as at a change of material). Tension positive.
