@@ -7,6 +7,7 @@
  * @packageDocumentation
  */
 export * from "./errors/index.js";
+export * from "./section/index.js";
 export * from "./model/index.js";
 export * from "./report/index.js";
 export * from "./stress/index.js";
