@@ -3,6 +3,8 @@
 import { runAll } from "./harness.js";
 import "./errors.bench.js";
 import "./report.bench.js";
+import "./math.bench.js";
+import "./beam.bench.js";
 import "./stress.bench.js";
 
 const pattern = process.argv[2];
