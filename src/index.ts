@@ -14,5 +14,4 @@ export * from "./supports/index.js";
 export * from "./beam/index.js";
 export * from "./section/index.js";
 export * from "./model/index.js";
-export * from "./report/index.js";
 export * from "./stress/index.js";
