@@ -1,6 +1,7 @@
 import type { Decimal } from "decimal.js";
 import { exact } from "./decimal.js";
 import type { Dimension } from "./kinds.js";
+import { rationalOf, times, type Rational } from "./rational.js";
 
 /**
  * One unit symbol that flexura knows, with its exact value in SI base units
@@ -88,6 +89,19 @@ export const unitCatalog: readonly CatalogUnit[] = Object.freeze(
     }),
   ),
 );
+
+const RATIOS: ReadonlyMap<CatalogUnit, Rational> = new Map(
+  unitCatalog.map((u) => {
+    const n = rationalOf(u.numerator.toString());
+    const d = rationalOf(u.denominator.toString());
+    return [u, times(n, { num: d.den, den: d.num })] as const;
+  }),
+);
+
+/** The exact value of one unit in SI base units, as a ratio of integers in lowest terms. */
+export function ratioOfUnit(u: CatalogUnit): Rational {
+  return RATIOS.get(u) ?? { num: 1n, den: 1n };
+}
 
 const BY_SPELLING: ReadonlyMap<string, CatalogUnit> = new Map(
   unitCatalog.flatMap((u) => [[u.symbol, u] as const, ...u.aliases.map((a) => [a, u] as const)]),

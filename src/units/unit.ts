@@ -1,14 +1,16 @@
 import type { Decimal } from "decimal.js";
 import { attempt, describeValue, FlexuraError, issue, type FlexuraIssue, type IssuePath, type Result } from "../errors/index.js";
-import { ONE } from "./decimal.js";
-import { parseUnitExpression, printUnitExpression, symbolsOf, type UnitExpression, type UnitTerm } from "./grammar.js";
+import { ratioOfUnit } from "./catalog.js";
+import { exact } from "./decimal.js";
+import { nearestNumber, power as raise, rational, times, type Rational } from "./rational.js";
+import { MAX_POWER, parseUnitExpression, printUnitExpression, symbolsOf, type UnitExpression, type UnitTerm } from "./grammar.js";
 import { kindsOfDimension, type Dimension, type QuantityKind } from "./kinds.js";
 import { suggestUnits } from "./suggest.js";
 
 /**
  * What a unit is worth in SI base units (metre, newton, radian), exactly.
- * One unit equals `numerator / denominator` base units; both are exact decimals composed
- * from the catalogue's exact definitions, and the division is done once, last.
+ * One unit equals `numerator / denominator` base units: two integers in lowest terms, composed
+ * without rounding from the catalogue's exact definitions (`in` is 127/5000 m).
  */
 export interface UnitFactor {
   /** Tag: always `"unit-factor"`. */
@@ -19,13 +21,13 @@ export interface UnitFactor {
   readonly dimension: Dimension;
   /** The kinds of quantity this unit can express (empty for a dimension flexura has no kind for). */
   readonly kinds: readonly QuantityKind[];
-  /** Numerator of the exact value of one unit in SI base units. */
+  /** Numerator of the exact value of one unit in SI base units: an integer (`127` for `in`). */
   readonly numerator: Decimal;
-  /** Denominator of the exact value of one unit in SI base units. */
+  /** Denominator of the exact value of one unit in SI base units: a positive integer (`5000` for `in`). */
   readonly denominator: Decimal;
   /** `numerator / denominator` to 64 significant digits (exact when it terminates within them). */
   readonly factor: Decimal;
-  /** `factor` rounded once to a JavaScript number, for hot loops. */
+  /** The exact value rounded once to the nearest JavaScript number, for hot loops. */
   readonly scale: number;
 }
 
@@ -41,8 +43,9 @@ const CACHE_LIMIT = 256;
 const cache = new Map<string, UnitFactor>();
 
 interface Accumulated {
-  numerator: Decimal;
-  denominator: Decimal;
+  ratio: Rational;
+  /** The first symbol whose powers multiply beyond the limit, as `m^16`. */
+  tooHigh: string | undefined;
   length: number;
   force: number;
   angle: number;
@@ -57,18 +60,35 @@ function accumulate(expression: UnitExpression, power: number, into: Accumulated
     const u = t.unit;
     if (u === undefined) return; // reported by the caller
     const e = p * t.power;
-    const [up, down] = e >= 0 ? [u.numerator, u.denominator] : [u.denominator, u.numerator];
-    const n = Math.abs(e);
-    if (n !== 0) {
-      into.numerator = into.numerator.times(up.pow(n));
-      into.denominator = into.denominator.times(down.pow(n));
+    if (Math.abs(e) > MAX_POWER) {
+      into.tooHigh ??= `${u.symbol}^${e}`;
+      return;
     }
+    if (e !== 0) into.ratio = times(into.ratio, raise(ratioOfUnit(u), e));
     into.length += e * u.dimension.length;
     into.force += e * u.dimension.force;
     into.angle += e * u.dimension.angle;
   };
   for (const t of expression.numerator) term(t, power);
   if (expression.denominator) term(expression.denominator, -power);
+}
+
+/** A unit's exact ratio, with the same integers as doubles when both are below 2^53 (else Infinity). */
+export interface UnitRatio extends Rational {
+  readonly small: { readonly num: number; readonly den: number };
+}
+
+const RATIOS = new WeakMap<UnitFactor, UnitRatio>();
+const LIMIT = 2n ** 53n;
+
+function withSmall(r: Rational): UnitRatio {
+  const fits = r.num < LIMIT && r.den < LIMIT;
+  return { num: r.num, den: r.den, small: fits ? { num: Number(r.num), den: Number(r.den) } : { num: Infinity, den: Infinity } };
+}
+
+/** The exact value of one unit in SI base units as a ratio of integers (internal fast path). */
+export function ratioOf(unit: UnitFactor): UnitRatio {
+  return RATIOS.get(unit) ?? withSmall(rational(BigInt(unit.numerator.toFixed()), BigInt(unit.denominator.toFixed())));
 }
 
 /**
@@ -93,20 +113,28 @@ export function readUnit(text: string, path: IssuePath): FlexuraIssue[] | UnitFa
       });
     });
   }
-  const acc: Accumulated = { numerator: ONE, denominator: ONE, length: 0, force: 0, angle: 0 };
+  const acc: Accumulated = { ratio: { num: 1n, den: 1n }, tooHigh: undefined, length: 0, force: 0, angle: 0 };
   accumulate(parsed.expression, 1, acc);
+  if (acc.tooHigh !== undefined) {
+    const message = `The unit ${JSON.stringify(text)} cannot be read: its powers multiply to ${acc.tooHigh}, beyond the limit of ${MAX_POWER}.`;
+    return [issue("unit-syntax", path, message, { unit: text, at: 0 })];
+  }
   const dimension: Dimension = Object.freeze({ length: acc.length, force: acc.force, angle: acc.angle });
-  const factor = Object.freeze(acc.numerator.div(acc.denominator));
-  return Object.freeze({
+  const numerator = exact(acc.ratio.num.toString());
+  const denominator = exact(acc.ratio.den.toString());
+  const factor = Object.freeze(numerator.div(denominator));
+  const result: UnitFactor = Object.freeze({
     kind: "unit-factor",
     unit: printUnitExpression(parsed.expression),
     dimension,
     kinds: kindsOfDimension(dimension),
-    numerator: Object.freeze(acc.numerator),
-    denominator: Object.freeze(acc.denominator),
+    numerator,
+    denominator,
     factor,
-    scale: factor.toNumber(),
+    scale: nearestNumber(acc.ratio.num, acc.ratio.den) ?? factor.toNumber(),
   });
+  RATIOS.set(result, withSmall(acc.ratio));
+  return result;
 }
 
 /**
