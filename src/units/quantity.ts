@@ -56,7 +56,7 @@ export function readQuantity(text: unknown, kind: unknown, path: IssuePath, foun
   }
   const asNumber = Number(number.digits);
   if (!Number.isFinite(asNumber) || (asNumber === 0 && /[1-9]/.test(number.digits.split(/[eE]/)[0] ?? ""))) {
-    found.push(issue("number-out-of-range", path, `The number ${number.digits} in ${JSON.stringify(text)} is outside what a JavaScript number can hold (about 1e-308 to 1e308).`, { text }));
+    found.push(issue("number-out-of-range", path, `The number ${number.digits} in ${JSON.stringify(text)} is outside what a JavaScript number can hold (about 5e-324 to 1.8e308).`, { text }));
     return undefined;
   }
   const unitText = number.rest.trim();

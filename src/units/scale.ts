@@ -1,10 +1,7 @@
 import { issue, type FlexuraIssue, type IssuePath } from "../errors/index.js";
 import { ExactDecimal } from "./decimal.js";
-import { nearestNumber, scaledInteger } from "./rational.js";
-import { ratioOf, type UnitFactor } from "./unit.js";
+import { smallRatioOf, type UnitFactor } from "./unit.js";
 
-const FAST_DIGITS = 40;
-const FAST_EXPONENT = 400;
 
 /**
  * `amount` in unit `from` expressed in unit `to` (either may be `undefined`, meaning the SI base
@@ -13,10 +10,12 @@ const FAST_EXPONENT = 400;
  * Returns an issue when the result overflows or a non-zero amount underflows to zero.
  */
 export function rescale(amount: string | number, from: UnitFactor | undefined, to: UnitFactor | undefined, path: IssuePath, shown: () => string): number | FlexuraIssue {
-  const text = typeof amount === "number" ? String(amount) : amount;
-  const fast = text.length <= FAST_DIGITS ? exactRescale(text, from, to) : undefined;
-  if (fast !== undefined && Number.isFinite(fast)) return fast === 0 ? 0 : fast;
-  return decimalRescale(text, from, to, path, shown);
+  const value = exactRescale(typeof amount === "number" ? String(amount) : amount, from, to);
+  if (Number.isFinite(value) && value !== 0) return value;
+  if (value === 0 && !/[1-9]/.test(String(amount).split(/[eE]/)[0] ?? "")) return 0;
+  const where = to === undefined ? "SI base units" : to.unit;
+  const size = value === 0 ? "too small" : "too large";
+  return issue("number-out-of-range", path, `${shown()} is ${size} to hold as a JavaScript number in ${where} (magnitudes from about 5e-324 to 1.8e308).`, { size });
 }
 
 const NUMBER_PARTS = /^([+-]?)(\d*)(?:\.(\d*))?(?:[eE]([+-]?\d+))?$/;
@@ -37,14 +36,14 @@ function smallRescale(text: string, from: UnitFactor | undefined, to: UnitFactor
   let p = Number(digits);
   let q = 1;
   if (from !== undefined) {
-    const r = ratioOf(from);
-    p *= r.small.num;
-    q *= r.small.den;
+    const r = smallRatioOf(from);
+    p *= r.num;
+    q *= r.den;
   }
   if (to !== undefined) {
-    const r = ratioOf(to);
-    p *= r.small.den;
-    q *= r.small.num;
+    const r = smallRatioOf(to);
+    p *= r.den;
+    q *= r.num;
   }
   if (exponent >= 0) p *= 10 ** exponent;
   else q *= 10 ** -exponent;
@@ -54,33 +53,13 @@ function smallRescale(text: string, from: UnitFactor | undefined, to: UnitFactor
   return m[1] === "-" ? -value : value;
 }
 
-/** The exact path: exact, one rounding; undefined for the rare cases it leaves to the decimal path. */
-export function exactRescale(text: string, from: UnitFactor | undefined, to: UnitFactor | undefined): number | undefined {
+/**
+ * `text` (decimal) in `from` expressed in `to`: exactly when every integer involved is below 2^53
+ * (all in doubles), else through decimal.js at 64 significant digits; rounded once either way.
+ */
+export function exactRescale(text: string, from: UnitFactor | undefined, to: UnitFactor | undefined): number {
   const small = smallRescale(text, from, to);
   if (small !== undefined) return small;
-  const s = scaledInteger(text);
-  if (s === undefined || Math.abs(s.exponent) > FAST_EXPONENT) return undefined;
-  let p = s.mantissa;
-  let q = 1n;
-  if (from !== undefined) {
-    const r = ratioOf(from);
-    p *= r.num;
-    q *= r.den;
-  }
-  if (to !== undefined) {
-    const r = ratioOf(to);
-    p *= r.den;
-    q *= r.num;
-  }
-  if (q < 0n) [p, q] = [-p, -q];
-  const ten = 10n ** BigInt(Math.abs(s.exponent));
-  if (s.exponent >= 0) p *= ten;
-  else q *= ten;
-  return nearestNumber(p, q);
-}
-
-/** The decimal.js path: 64 significant digits, then one rounding; also words the range errors. */
-export function decimalRescale(text: string, from: UnitFactor | undefined, to: UnitFactor | undefined, path: IssuePath, shown: () => string): number | FlexuraIssue {
   let top = new ExactDecimal(text);
   let bottom = new ExactDecimal(1);
   if (from !== undefined) {
@@ -91,13 +70,5 @@ export function decimalRescale(text: string, from: UnitFactor | undefined, to: U
     top = top.times(to.denominator);
     bottom = bottom.times(to.numerator);
   }
-  const exactValue = top.div(bottom);
-  const value = exactValue.toNumber();
-  if (!Number.isFinite(value) || (value === 0 && !exactValue.isZero())) {
-    const where = to === undefined ? "in SI base units" : `in ${to.unit}`;
-    return issue("number-out-of-range", path, `${shown()} is ${exactValue.toSignificantDigits(6).toString()} ${where}, which a JavaScript number cannot hold (about 1e-308 to 1e308).`, {
-      value: exactValue.toSignificantDigits(17).toString(),
-    });
-  }
-  return value === 0 ? 0 : value;
+  return top.div(bottom).toNumber();
 }

@@ -1,16 +1,15 @@
 import type { Decimal } from "decimal.js";
 import { attempt, describeValue, FlexuraError, issue, type FlexuraIssue, type IssuePath, type Result } from "../errors/index.js";
-import { ratioOfUnit } from "./catalog.js";
-import { exact } from "./decimal.js";
-import { nearestNumber, power as raise, rational, times, type Rational } from "./rational.js";
+import { ONE } from "./decimal.js";
 import { MAX_POWER, parseUnitExpression, printUnitExpression, symbolsOf, type UnitExpression, type UnitTerm } from "./grammar.js";
 import { kindsOfDimension, type Dimension, type QuantityKind } from "./kinds.js";
 import { suggestUnits } from "./suggest.js";
 
 /**
  * What a unit is worth in SI base units (metre, newton, radian), exactly.
- * One unit equals `numerator / denominator` base units: two integers in lowest terms, composed
- * without rounding from the catalogue's exact definitions (`in` is 127/5000 m).
+ * One unit equals `numerator / denominator` base units: two exact decimals composed from the
+ * catalogue's exact definitions (products and powers of terminating decimals, exact within 64
+ * significant digits); the one division is done last.
  */
 export interface UnitFactor {
   /** Tag: always `"unit-factor"`. */
@@ -21,13 +20,13 @@ export interface UnitFactor {
   readonly dimension: Dimension;
   /** The kinds of quantity this unit can express (empty for a dimension flexura has no kind for). */
   readonly kinds: readonly QuantityKind[];
-  /** Numerator of the exact value of one unit in SI base units: an integer (`127` for `in`). */
+  /** Numerator of the exact value of one unit in SI base units (`0.0254` for `in`). */
   readonly numerator: Decimal;
-  /** Denominator of the exact value of one unit in SI base units: a positive integer (`5000` for `in`). */
+  /** Denominator of the exact value of one unit in SI base units (`1` for `in`, `0.00064516` for `psi`). */
   readonly denominator: Decimal;
   /** `numerator / denominator` to 64 significant digits (exact when it terminates within them). */
   readonly factor: Decimal;
-  /** The exact value rounded once to the nearest JavaScript number, for hot loops. */
+  /** `factor` rounded once to a JavaScript number, for hot loops. */
   readonly scale: number;
 }
 
@@ -43,7 +42,8 @@ const CACHE_LIMIT = 256;
 const cache = new Map<string, UnitFactor>();
 
 interface Accumulated {
-  ratio: Rational;
+  numerator: Decimal;
+  denominator: Decimal;
   /** The first symbol whose powers multiply beyond the limit, as `m^16`. */
   tooHigh: string | undefined;
   length: number;
@@ -64,7 +64,10 @@ function accumulate(expression: UnitExpression, power: number, into: Accumulated
       into.tooHigh ??= `${u.symbol}^${e}`;
       return;
     }
-    if (e !== 0) into.ratio = times(into.ratio, raise(ratioOfUnit(u), e));
+    const [up, down] = e >= 0 ? [u.numerator, u.denominator] : [u.denominator, u.numerator];
+    const n = Math.abs(e);
+    into.numerator = into.numerator.times(up.pow(n));
+    into.denominator = into.denominator.times(down.pow(n));
     into.length += e * u.dimension.length;
     into.force += e * u.dimension.force;
     into.angle += e * u.dimension.angle;
@@ -73,22 +76,24 @@ function accumulate(expression: UnitExpression, power: number, into: Accumulated
   if (expression.denominator) term(expression.denominator, -power);
 }
 
-/** A unit's exact ratio, with the same integers as doubles when both are below 2^53 (else Infinity). */
-export interface UnitRatio extends Rational {
-  readonly small: { readonly num: number; readonly den: number };
+/** Numerator and denominator scaled to integers by one power of ten, as doubles when both are below 2^53 (else Infinity). */
+export interface SmallRatio {
+  readonly num: number;
+  readonly den: number;
 }
 
-const RATIOS = new WeakMap<UnitFactor, UnitRatio>();
-const LIMIT = 2n ** 53n;
+const SMALL = new WeakMap<UnitFactor, SmallRatio>();
 
-function withSmall(r: Rational): UnitRatio {
-  const fits = r.num < LIMIT && r.den < LIMIT;
-  return { num: r.num, den: r.den, small: fits ? { num: Number(r.num), den: Number(r.den) } : { num: Infinity, den: Infinity } };
+function smallRatio(numerator: Decimal, denominator: Decimal): SmallRatio {
+  const scale = Math.max(numerator.decimalPlaces(), denominator.decimalPlaces());
+  const num = numerator.times(10 ** scale).toNumber();
+  const den = denominator.times(10 ** scale).toNumber();
+  return num < 2 ** 53 && den < 2 ** 53 && scale <= 22 ? { num, den } : { num: Infinity, den: Infinity };
 }
 
-/** The exact value of one unit in SI base units as a ratio of integers (internal fast path). */
-export function ratioOf(unit: UnitFactor): UnitRatio {
-  return RATIOS.get(unit) ?? withSmall(rational(BigInt(unit.numerator.toFixed()), BigInt(unit.denominator.toFixed())));
+/** The unit's value as a ratio of two integers below 2^53, when it is one (internal fast path). */
+export function smallRatioOf(unit: UnitFactor): SmallRatio {
+  return SMALL.get(unit) ?? smallRatio(unit.numerator, unit.denominator);
 }
 
 /**
@@ -113,15 +118,15 @@ export function readUnit(text: string, path: IssuePath): FlexuraIssue[] | UnitFa
       });
     });
   }
-  const acc: Accumulated = { ratio: { num: 1n, den: 1n }, tooHigh: undefined, length: 0, force: 0, angle: 0 };
+  const acc: Accumulated = { numerator: ONE, denominator: ONE, tooHigh: undefined, length: 0, force: 0, angle: 0 };
   accumulate(parsed.expression, 1, acc);
   if (acc.tooHigh !== undefined) {
     const message = `The unit ${JSON.stringify(text)} cannot be read: its powers multiply to ${acc.tooHigh}, beyond the limit of ${MAX_POWER}.`;
     return [issue("unit-syntax", path, message, { unit: text, at: 0 })];
   }
   const dimension: Dimension = Object.freeze({ length: acc.length, force: acc.force, angle: acc.angle });
-  const numerator = exact(acc.ratio.num.toString());
-  const denominator = exact(acc.ratio.den.toString());
+  const numerator = Object.freeze(acc.numerator);
+  const denominator = Object.freeze(acc.denominator);
   const factor = Object.freeze(numerator.div(denominator));
   const result: UnitFactor = Object.freeze({
     kind: "unit-factor",
@@ -131,9 +136,9 @@ export function readUnit(text: string, path: IssuePath): FlexuraIssue[] | UnitFa
     numerator,
     denominator,
     factor,
-    scale: nearestNumber(acc.ratio.num, acc.ratio.den) ?? factor.toNumber(),
+    scale: factor.toNumber(),
   });
-  RATIOS.set(result, withSmall(acc.ratio));
+  SMALL.set(result, smallRatio(numerator, denominator));
   return result;
 }
 
