@@ -6,6 +6,7 @@ export const entries = {
   section: "src/section/index.ts",
   model: "src/model/index.ts",
   stress: "src/stress/index.ts",
+  check: "src/check/index.ts",
 } as const;
 
 export default defineConfig({

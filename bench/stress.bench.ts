@@ -1,5 +1,6 @@
 import { bench, suite } from "./harness.js";
-import { biaxialBendingStress, cornerStresses, extremeBendingStresses, peakShearStress, shearStressAt, type DepthBand } from "../src/stress/index.js";
+import { iSection } from "../src/section/index.js";
+import { biaxialBendingStress, cornerStresses, extremeBendingStresses, peakShearStress, sectionPeakShearStress, shearStressAt, type DepthBand } from "../src/stress/index.js";
 
 // An invented welded I section 180 x 12 flanges, 8 mm web, 360 mm deep, as depth bands about its centroid.
 const iSection: DepthBand[] = [
@@ -24,4 +25,9 @@ suite("stress", () => {
   bench("stress: cornerStresses (angle, 6 corners)", () => cornerStresses({ momentZ: 8e6, momentY: 0 }, angle, corners));
   bench("stress: shearStressAt (I section, one cut)", () => shearStressAt(1.5e5, 0, iSection, { secondMomentZ: inertia }));
   bench("stress: peakShearStress (I section)", () => peakShearStress(1.5e5, iSection, { secondMomentZ: inertia }));
+});
+
+const rolled = iSection({ depth: 360, flangeWidth: 180, flangeThickness: 12, webThickness: 8, rootRadius: 10 });
+suite("stress on sections", () => {
+  bench("stress: sectionPeakShearStress (I section with root fillets)", () => sectionPeakShearStress(1.5e5, rolled));
 });

@@ -10,3 +10,4 @@ export * from "./errors/index.js";
 export * from "./section/index.js";
 export * from "./model/index.js";
 export * from "./stress/index.js";
+export * from "./check/index.js";
