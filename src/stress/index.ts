@@ -26,5 +26,5 @@ export {
   sectionCornerStresses,
   trySectionCornerStresses,
 } from "./section-stress.js";
-export type { PartStress, PartStresses } from "./section-parts.js";
+export type { PartStress, PartStresses, PartFibreStress } from "./section-parts.js";
 export { sectionPartStresses, trySectionPartStresses } from "./section-parts.js";

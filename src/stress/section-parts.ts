@@ -18,6 +18,16 @@ export interface PartStress {
   readonly stressBottom: number;
 }
 
+/** The stress at one fibre of one part. */
+export interface PartFibreStress {
+  /** Index of the part in `section.parts`. */
+  readonly part: number;
+  /** y of the fibre, up from the transformed centroid (length). */
+  readonly y: number;
+  /** The stress there (force / length^2, tension positive). */
+  readonly stress: number;
+}
+
 /** Bending stresses in every solid part of a section. */
 export interface PartStresses {
   /** Tag. */
@@ -25,9 +35,9 @@ export interface PartStresses {
   /** One entry per solid part, in the order of `section.parts` (holes are left out). */
   readonly parts: readonly PartStress[];
   /** The most tensile stress in any part and where. */
-  readonly tension: { readonly part: number; readonly y: number; readonly stress: number };
+  readonly tension: PartFibreStress;
   /** The most compressive stress in any part and where. */
-  readonly compression: { readonly part: number; readonly y: number; readonly stress: number };
+  readonly compression: PartFibreStress;
 }
 
 /**
@@ -65,8 +75,8 @@ export function sectionPartStresses(moment: number, section: Section, options?: 
       stressBottom: n * stressAt(moment, p.extremes.bottom, props.secondMomentZ),
     });
   });
-  let tension = { part: parts[0]?.part ?? 0, y: parts[0]?.yBottom ?? 0, stress: -Infinity };
-  let compression = { part: parts[0]?.part ?? 0, y: parts[0]?.yTop ?? 0, stress: Infinity };
+  let tension: PartFibreStress = { part: parts[0]?.part ?? 0, y: parts[0]?.yBottom ?? 0, stress: -Infinity };
+  let compression: PartFibreStress = { part: parts[0]?.part ?? 0, y: parts[0]?.yTop ?? 0, stress: Infinity };
   for (const p of parts) {
     for (const [y, stress] of [
       [p.yTop, p.stressTop],
