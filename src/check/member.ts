@@ -4,6 +4,7 @@ import { bendingAllowables, checkLimits, deflectionLimits, type DeflectionLimit,
 import { stressesOf, type MemberStresses, type PeakBendingStress } from "./peaks.js";
 import { resolveSections, type MemberSections } from "./sections.js";
 import type { CheckedSolution } from "./solution.js";
+import { deflectionResult } from "./single.js";
 import { checkResult, type CheckResult } from "./types.js";
 
 /** Everything checked on a member, and the governing check. */
@@ -23,28 +24,13 @@ export interface MemberCheck {
 }
 
 function bendingFormula(p: PeakBendingStress, sense: "t" | "c"): string {
-  const which = p.moment >= 0 ? "largest sagging moment" : "largest hogging moment";
-  return `sigma_${sense} = |M| |y_${p.fibre}| / I_z = |-M y / I_z| at the ${p.fibre} fibre under the ${which}`;
+  const which = p.moment >= 0 ? "sagging" : "hogging";
+  return `sigma_${sense} = |M y_${p.fibre} / I_z|, ${which}`;
 }
 
 function deflectionCheck(limit: DeflectionLimit, d: SpanDeflection, index: number): CheckResult {
-  const length = d.to - d.from;
-  const where = `${d.spanKind} ${d.span + 1} (x = ${d.from} to ${d.to})`;
-  const at = { x: d.at, span: d.span };
-  switch (limit.kind) {
-    case "ratio": {
-      const factor = d.spanKind === "cantilever" ? (limit.cantileverFactor ?? 2) : 1;
-      const capacity = (factor * length) / limit.ratio;
-      const formula = factor === 1 ? `|delta| <= L / ${limit.ratio}` : `|delta| <= ${factor} L / ${limit.ratio} (cantilever)`;
-      return checkResult("deflection", `deflection, ${where}, limit ${index + 1}`, Math.abs(d.deflection), capacity, at, formula);
-    }
-    case "absolute":
-      return checkResult("deflection", `deflection, ${where}, limit ${index + 1}`, Math.abs(d.deflection), limit.limit, at, `|delta| <= ${limit.limit}`);
-    default: {
-      const never: never = limit;
-      return never;
-    }
-  }
+  const label = `deflection, ${d.spanKind} ${d.span + 1} (x = ${d.from} to ${d.to}), limit ${index + 1}`;
+  return deflectionResult(limit, Math.abs(d.deflection), d.to - d.from, d.spanKind === "cantilever", { x: d.at, span: d.span }, label);
 }
 
 /**
@@ -93,7 +79,7 @@ export function checkMember(solution: CheckedSolution, sections: MemberSections,
   }
   if (limits.shearStress !== undefined && stresses.shear !== null) {
     const v = stresses.shear;
-    checks.push(checkResult("shear-stress", "shear stress", v.stress, limits.shearStress, { x: v.x, y: v.y, stretch: v.stretch }, "tau = |V| Q / (I_z b), at the largest |V| and the height where Q / b peaks"));
+    checks.push(checkResult("shear-stress", "shear stress", v.stress, limits.shearStress, { x: v.x, y: v.y, stretch: v.stretch }, "tau = |V| Q / (I_z b)"));
   }
   deflectionLimits(limits).forEach((limit, i) => {
     for (const d of deflections) checks.push(deflectionCheck(limit, d, i));

@@ -104,21 +104,16 @@ export function checkDeflection(deflection: number, length: number, limit: Defle
   checkPositive(found, length, ["length"], "span length");
   checkLimits(found, { deflection: limit }, []);
   found.throwIfAny();
-  const at = options?.at ?? { x: 0 };
   const cantilever = options?.cantilever === true;
-  switch (limit.kind) {
-    case "ratio": {
-      const factor = cantilever ? (limit.cantileverFactor ?? 2) : 1;
-      const formula = factor === 1 ? `|delta| <= L / ${limit.ratio}` : `|delta| <= ${factor} L / ${limit.ratio} (cantilever)`;
-      return checkResult("deflection", cantilever ? "deflection, cantilever" : "deflection, span", Math.abs(deflection), (factor * length) / limit.ratio, at, formula);
-    }
-    case "absolute":
-      return checkResult("deflection", "deflection", Math.abs(deflection), limit.limit, at, `|delta| <= ${limit.limit}`);
-    default: {
-      const never: never = limit;
-      return never;
-    }
-  }
+  return deflectionResult(limit, Math.abs(deflection), length, cantilever, options?.at ?? { x: 0 }, cantilever ? "deflection, cantilever" : "deflection, span");
+}
+
+/** The deflection check for validated input (shared with the member check). */
+export function deflectionResult(limit: DeflectionLimit, demand: number, length: number, cantilever: boolean, at: CheckLocation, label: string): CheckResult {
+  if (limit.kind === "absolute") return checkResult("deflection", label, demand, limit.limit, at, `|delta| <= ${limit.limit}`);
+  const factor = cantilever ? (limit.cantileverFactor ?? 2) : 1;
+  const formula = `|delta| <= ${factor === 1 ? "" : `${factor} `}L / ${limit.ratio}${cantilever ? " (cantilever)" : ""}`;
+  return checkResult("deflection", label, demand, (factor * length) / limit.ratio, at, formula);
 }
 
 /**

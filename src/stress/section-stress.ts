@@ -2,7 +2,7 @@ import { IssueCollector, attempt, requireFinite, type Result } from "../errors/i
 import { firstMomentAbove, sectionProperties, type Section, type SectionProperties, type SectionPropertiesOptions } from "../section/index.js";
 import { bendingStressPlane, type BiaxialMoments } from "./biaxial.js";
 import { cornerStresses, type CornerStresses } from "./corners.js";
-import { findPeak, pointAt, profilePoints, type CutSource } from "./shear-peak.js";
+import { checkPointsPerBand, findPeak, pointAt, profilePoints, type CutSource } from "./shear-peak.js";
 import type { ShearStressPoint, ShearStressProfile } from "./shear-profile.js";
 import { candidatePoints, sectionLevels } from "./section-points.js";
 
@@ -89,10 +89,7 @@ export function sectionShearStressProfile(shear: number, section: Section, optio
   const props = sectionProperties(section, options);
   const found = new IssueCollector();
   requireFinite(found, shear, ["shear"], "shear force");
-  const perBand = options?.pointsPerBand ?? 16;
-  if (!Number.isInteger(perBand) || perBand < 1 || perBand > 1e5) {
-    found.add("points-per-band-invalid", ["options", "pointsPerBand"], `pointsPerBand must be a whole number from 1 to 100000; got ${String(perBand)}.`);
-  }
+  const perBand = checkPointsPerBand(found, options?.pointsPerBand);
   found.throwIfAny();
   const source = cutSource(section, props, options);
   const points = profilePoints(shear, source, props.secondMomentZ, Math.max(perBand, 16));
