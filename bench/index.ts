@@ -8,6 +8,7 @@ import "./math.bench.js";
 import "./beam.bench.js";
 import "./stress.bench.js";
 import "./check.bench.js";
+import "./section.bench.js";
 
 const pattern = process.argv[2];
 await runAll(pattern ? new RegExp(pattern) : undefined);
