@@ -1,3 +1,4 @@
+import { attempt, type Result } from "../../errors/index.js";
 import { section } from "../construct.js";
 import type { Section, SectionPart } from "../types.js";
 import { box, checkDimensions, withExtras, type ShapeOptions } from "./dimensions.js";
@@ -56,4 +57,17 @@ export function angle(dims: AngleDimensions, options?: ShapeOptions): Section {
   const parts: SectionPart[] = [box(left, left + t, bottom, h / 2, m), box(left + t, w / 2, bottom, bottom + t, m)];
   if (r > 0) parts.push(withExtras({ kind: "fillet", corner: { y: bottom + t, z: left + t }, radius: r, orientation: 0 }, m));
   return section(parts);
+}
+
+/**
+ * The non-throwing form of {@link angle}.
+ *
+ * @example
+ * ```ts
+ * const r = tryAngle({ verticalLeg: 50, thickness: 60 });
+ * if (!r.ok) console.log(r.error.code); // "thickness-too-large"
+ * ```
+ */
+export function tryAngle(dims: AngleDimensions, options?: ShapeOptions): Result<Section> {
+  return attempt(() => angle(dims, options));
 }

@@ -1,3 +1,4 @@
+import { attempt, type Result } from "../../errors/index.js";
 import { section } from "../construct.js";
 import type { Section, SectionPart } from "../types.js";
 import { box, checkDimensions, withExtras, type ShapeOptions } from "./dimensions.js";
@@ -61,4 +62,17 @@ export function channel(dims: ChannelDimensions, options?: ShapeOptions): Sectio
     );
   }
   return section(parts);
+}
+
+/**
+ * The non-throwing form of {@link channel}.
+ *
+ * @example
+ * ```ts
+ * const r = tryChannel({ depth: 200, flangeWidth: 75, flangeThickness: 11, webThickness: 80 });
+ * if (!r.ok) console.log(r.error.code); // "web-too-thick"
+ * ```
+ */
+export function tryChannel(dims: ChannelDimensions, options?: ShapeOptions): Result<Section> {
+  return attempt(() => channel(dims, options));
 }

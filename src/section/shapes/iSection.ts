@@ -1,3 +1,4 @@
+import { attempt, type Result } from "../../errors/index.js";
 import { section } from "../construct.js";
 import type { Material, Section, SectionPart } from "../types.js";
 import { box, checkDimensions, withExtras, type ShapeOptions } from "./dimensions.js";
@@ -97,4 +98,17 @@ export function iSection(dims: ISectionDimensions, options?: ShapeOptions): Sect
     box(-bb / 2, bb / 2, bottom, bottom + tb, m),
     ...rootFillets(tw / 2, r, top - tt, bottom + tb, m),
   ]);
+}
+
+/**
+ * The non-throwing form of {@link iSection}.
+ *
+ * @example
+ * ```ts
+ * const r = tryISection({ depth: 20, flangeWidth: 100, flangeThickness: 10, webThickness: 6 });
+ * if (!r.ok) console.log(r.error.code); // "flange-too-thick"
+ * ```
+ */
+export function tryISection(dims: ISectionDimensions, options?: ShapeOptions): Result<Section> {
+  return attempt(() => iSection(dims, options));
 }

@@ -1,3 +1,4 @@
+import { attempt, type Result } from "../../errors/index.js";
 import { section } from "../construct.js";
 import type { Section } from "../types.js";
 import { cornerFillets } from "./corners.js";
@@ -61,4 +62,17 @@ export function rectangularHollow(dims: RectangularHollowDimensions, options?: S
     box(-b / 2 + t, b / 2 - t, -d / 2 + t, d / 2 - t, m, true),
     ...cornerFillets(b / 2 - t, d / 2 - t, ri, m, false),
   ]);
+}
+
+/**
+ * The non-throwing form of {@link rectangularHollow}.
+ *
+ * @example
+ * ```ts
+ * const r = tryRectangularHollow({ width: 10, depth: 20, wallThickness: 5 });
+ * if (!r.ok) console.log(r.error.code); // "wall-too-thick"
+ * ```
+ */
+export function tryRectangularHollow(dims: RectangularHollowDimensions, options?: ShapeOptions): Result<Section> {
+  return attempt(() => rectangularHollow(dims, options));
 }

@@ -1,3 +1,4 @@
+import { attempt, type Result } from "../../errors/index.js";
 import { section } from "../construct.js";
 import type { Section } from "../types.js";
 import { box, checkDimensions, type ShapeOptions } from "./dimensions.js";
@@ -54,4 +55,17 @@ export function tee(dims: TeeDimensions, options?: ShapeOptions): Section {
   found.throwIfAny();
   const m = options?.material;
   return section([box(-b / 2, b / 2, d / 2 - tf, d / 2, m), box(-tw / 2, tw / 2, -d / 2, d / 2 - tf, m), ...rootFillets(tw / 2, r, d / 2 - tf, undefined, m)]);
+}
+
+/**
+ * The non-throwing form of {@link tee}.
+ *
+ * @example
+ * ```ts
+ * const r = tryTee({ depth: 10, flangeWidth: 100, flangeThickness: 10, webThickness: 6 });
+ * if (!r.ok) console.log(r.error.code); // "flange-too-thick"
+ * ```
+ */
+export function tryTee(dims: TeeDimensions, options?: ShapeOptions): Result<Section> {
+  return attempt(() => tee(dims, options));
 }
