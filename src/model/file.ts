@@ -38,6 +38,14 @@ export interface ModelFileUnits {
   readonly rotationalStiffness?: string;
 }
 
+/** A section as written in a model file: a shape name and its dimensions. */
+export interface ModelFileSection {
+  /** The shape: `"rectangle"`, `"circle"`, `"pipe"`, `"rectangular-hollow"`, `"i-section"`, `"tee"`, `"channel"`, `"angle"`, `"plate-girder"`. */
+  readonly shape: string;
+  /** Its dimensions by name (see docs/model-format.md), in the section-length unit or with units. */
+  readonly [dimension: string]: ModelQuantity;
+}
+
 /** A support as written in a model file (`type` rather than `kind`). */
 export interface ModelFileSupport {
   /** Position from the left end. */
@@ -114,7 +122,7 @@ export interface ModelFile {
     readonly I: ModelQuantity;
   }[];
   /** A standard shape and its dimensions, such as `{ "shape": "rectangle", "width": 90, "depth": 240 }`. */
-  readonly section?: { readonly shape: string } & { readonly [dimension: string]: ModelQuantity };
+  readonly section?: ModelFileSection;
   /** The section's material. */
   readonly material?: {
     /** A label. */

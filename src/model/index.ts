@@ -29,3 +29,9 @@ export type {
   ModelWarning,
   ModelScale,
 } from "./analysis.js";
+export type { ModelFile, ModelFileSection, ModelFileUnits, ModelFileSupport, ModelFileLoad, ModelQuantity } from "./file.js";
+export type { ModelJsonSchema } from "./schema.js";
+export { modelSchema, MODEL_SCHEMA_ID } from "./schema.js";
+export { parseModel, tryParseModel } from "./parse.js";
+export { modelToJson } from "./to-json.js";
+export { DEFAULT_MODEL_UNITS } from "./units.js";

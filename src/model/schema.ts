@@ -3,7 +3,13 @@ import { definitions } from "./schema-parts.js";
 import { sectionDefinitions } from "./schema-section.js";
 
 /** The `$id` of the published model-file schema. */
-export const MODEL_SCHEMA_ID = "https://flexura.dev/schema/flexura-model.schema.json";
+export const MODEL_SCHEMA_ID = "urn:flexura:model-schema:1";
+
+/** A JSON Schema document as a plain JSON object (keywords to values). */
+export interface ModelJsonSchema {
+  /** A schema keyword (`type`, `properties`, `$defs`, ...) and its value. */
+  readonly [keyword: string]: unknown;
+}
 
 /**
  * The JSON Schema (draft 2020-12) of flexura model files, as a plain object: the same object that
@@ -19,7 +25,7 @@ export const MODEL_SCHEMA_ID = "https://flexura.dev/schema/flexura-model.schema.
  * console.log(JSON.stringify(modelSchema, null, 2)); // what `flexura schema` prints
  * ```
  */
-export const modelSchema = {
+export const modelSchema: ModelJsonSchema = {
   $schema: "https://json-schema.org/draft/2020-12/schema",
   $id: MODEL_SCHEMA_ID,
   title: "a flexura model",
@@ -54,4 +60,4 @@ export const modelSchema = {
   },
   additionalProperties: false,
   $defs: { ...definitions, ...sectionDefinitions },
-} as const;
+};

@@ -8,7 +8,7 @@ import type { SchemaNode } from "./schema-parts.js";
 type Node = { readonly [keyword: string]: unknown };
 type Json = Readonly<Record<string, unknown>>;
 
-const defs = modelSchema.$defs as Readonly<Record<string, SchemaNode>>;
+const defs = modelSchema["$defs"] as Readonly<Record<string, SchemaNode>>;
 
 function resolve(node: Node): Node | undefined {
   const target = node["$ref"];
@@ -147,7 +147,7 @@ function walk(schema: SchemaNode, value: unknown, path: IssuePath, out: FlexuraI
  */
 export function structuralIssues(json: unknown): readonly FlexuraIssue[] {
   const out: FlexuraIssue[] = [];
-  walk(modelSchema as unknown as SchemaNode, json, [], out, undefined);
+  walk(modelSchema, json, [], out, undefined);
   return out.map((i) =>
     i.code === "not-an-option" && i.path.length === 1 && i.path[0] === "format"
       ? { ...i, code: "unsupported-format", message: `This release reads model format 1; got ${String(i["value"])}. Update flexura or set "format": 1.` }
