@@ -4,6 +4,7 @@ import { defineConfig } from "tsdown";
 export const entries = {
   index: "src/index.ts",
   model: "src/model/index.ts",
+  stress: "src/stress/index.ts",
 } as const;
 
 export default defineConfig({

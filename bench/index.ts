@@ -2,6 +2,7 @@
 // `npm run bench -- <regex>` runs only the benchmarks whose names match.
 import { runAll } from "./harness.js";
 import "./errors.bench.js";
+import "./stress.bench.js";
 
 const pattern = process.argv[2];
 await runAll(pattern ? new RegExp(pattern) : undefined);

@@ -8,3 +8,4 @@
  */
 export * from "./errors/index.js";
 export * from "./model/index.js";
+export * from "./stress/index.js";

@@ -1,0 +1,270 @@
+import { IssueCollector, attempt, requireFinite, type Result } from "../errors/index.js";
+import { bandLevels, checkBands, firstMomentAbove, widthAt, type DepthBand } from "./bands.js";
+import type { ShearProperties } from "./shear.js";
+import { checkSecondMoment } from "./validate.js";
+
+/** The shear stress at one height of a section. */
+export interface ShearStressPoint {
+  /** Height of the cut, up from the centroid (length). */
+  readonly y: number;
+  /** Shear stress tau = V Q / (I b) (force / length^2), with the sign of V. */
+  readonly stress: number;
+  /** First moment of the (transformed) area above the cut (length^3). */
+  readonly firstMoment: number;
+  /** Width of material at the cut (length). */
+  readonly width: number;
+}
+
+/** The shear stress over the depth of a section, for plotting. */
+export interface ShearStressProfile {
+  /** Tag. */
+  readonly kind: "shear-stress-profile";
+  /**
+   * Points from the bottom to the top, including every height where the width changes; where
+   * the width steps (a flange meeting a web) the same y appears twice, below then above the step.
+   */
+  readonly points: readonly ShearStressPoint[];
+  /** The point of largest magnitude: see {@link peakShearStress}. */
+  readonly peak: ShearStressPoint;
+}
+
+/** Options of {@link shearStressProfile}. */
+export interface ShearStressProfileOptions {
+  /** Points per band between consecutive width-change heights (>= 1); 16 when omitted. */
+  readonly pointsPerBand?: number;
+}
+
+function area(band: DepthBand): number {
+  const n = (band.modularRatio ?? 1) * (band.hole === true ? -1 : 1);
+  return band.kind === "trapezoid" ? (n * (band.widthBottom + band.widthTop) * (band.yTop - band.yBottom)) / 2 : n * Math.PI * band.radius * band.radius;
+}
+
+function validate(shear: number, bands: readonly DepthBand[], section: ShearProperties, found: IssueCollector): void {
+  requireFinite(found, shear, ["shear"], "shear force");
+  checkSecondMoment(found, section.secondMomentZ, ["section", "secondMomentZ"]);
+  if (!checkBands(found, bands, ["bands"])) return;
+  const levels = bandLevels(bands);
+  const depth = (levels[levels.length - 1] ?? 0) - (levels[0] ?? 0);
+  const total = bands.reduce((s, b) => s + area(b), 0);
+  const moment = firstMomentAbove(bands, -Infinity);
+  if (!(total > 0)) {
+    found.add("bands-no-area", ["bands"], `The bands enclose no area (net ${total}): holes must lie inside solid parts.`, { area: total });
+  } else if (Math.abs(moment) > 1e-9 * total * depth) {
+    found.add(
+      "bands-not-about-centroid",
+      ["bands"],
+      `The bands' centroid lies at y = ${moment / total}, not at 0: measure every band's y up from the section's (transformed) centroid.`,
+      { centroidY: moment / total },
+    );
+  }
+}
+
+function point(shear: number, bands: readonly DepthBand[], inertia: number, y: number, width: number): ShearStressPoint {
+  const q = firstMomentAbove(bands, y) + 0;
+  const stress = width > 0 ? (shear * q) / (inertia * width) + 0 : 0;
+  return { y, stress, firstMoment: q, width };
+}
+
+/**
+ * Shear stress tau = V Q / (I b) at a horizontal cut of a section described by bands (see
+ * {@link DepthBand}); at a step in width it uses the narrower side (the larger stress).
+ * Source: Roark's Formulas for Stress and Strain, 8th ed., Sec. 8.1 (from memory).
+ *
+ * @param shear - Shear force V (force).
+ * @param y - Height of the cut, up from the centroid (length), within the section.
+ * @param bands - The section, y measured from its (transformed) centroid.
+ * @param section - `secondMomentZ` (length^4, > 0), transformed for several materials.
+ * @returns The stress with Q and b at the cut.
+ * @throws FlexuraError `second-moment-not-positive`, `fibre-outside-section`, `width-not-positive` (a gap),
+ *   `bands-not-about-centroid`, `bands-no-area`, and the band codes of {@link cutAt}.
+ * @example
+ * ```ts
+ * const rect = [{ kind: "trapezoid", yBottom: -100, yTop: 100, widthBottom: 100, widthTop: 100 }] as const;
+ * shearStressAt(30e3, 0, rect, { secondMomentZ: 100 * 200 ** 3 / 12 }).stress; // 2.25
+ * ```
+ */
+export function shearStressAt(shear: number, y: number, bands: readonly DepthBand[], section: ShearProperties): ShearStressPoint {
+  const found = new IssueCollector();
+  validate(shear, bands, section, found);
+  requireFinite(found, y, ["y"], "cut height y");
+  found.throwIfAny();
+  const levels = bandLevels(bands);
+  const bottom = levels[0] ?? 0;
+  const top = levels[levels.length - 1] ?? 0;
+  if (y < bottom || y > top) {
+    found.add("fibre-outside-section", ["y"], `The cut at y = ${y} lies outside the section (y from ${bottom} to ${top} about the centroid).`, { y, top, bottom });
+  }
+  const width = Math.min(widthAt(bands, y, "above"), widthAt(bands, y, "below"));
+  if (y > bottom && y < top && !(width > 0)) {
+    found.add("width-not-positive", ["y"], `There is no material at y = ${y} (a gap between parts): cut through the section.`, { y });
+  }
+  found.throwIfAny();
+  return point(shear, bands, section.secondMomentZ, y, width);
+}
+
+/**
+ * Non-throwing form of {@link shearStressAt}.
+ *
+ * @example
+ * ```ts
+ * tryShearStressAt(1, 500, [{ kind: "circle", centreY: 0, radius: 10 }], { secondMomentZ: 7854 }).ok; // false
+ * ```
+ */
+export function tryShearStressAt(shear: number, y: number, bands: readonly DepthBand[], section: ShearProperties): Result<ShearStressPoint> {
+  return attempt(() => shearStressAt(shear, y, bands, section));
+}
+
+const GOLDEN = (Math.sqrt(5) - 1) / 2;
+
+/** Maximises f on [a, b] by golden-section search to near machine precision. */
+function maximise(f: (y: number) => number, a: number, b: number): number {
+  let lo = a;
+  let hi = b;
+  let x1 = hi - GOLDEN * (hi - lo);
+  let x2 = lo + GOLDEN * (hi - lo);
+  let f1 = f(x1);
+  let f2 = f(x2);
+  for (let i = 0; i < 200 && hi - lo > 1e-13 * (Math.abs(lo) + Math.abs(hi) + 1e-300); i++) {
+    if (f1 < f2) {
+      lo = x1;
+      x1 = x2;
+      f1 = f2;
+      x2 = lo + GOLDEN * (hi - lo);
+      f2 = f(x2);
+    } else {
+      hi = x2;
+      x2 = x1;
+      f2 = f1;
+      x1 = hi - GOLDEN * (hi - lo);
+      f1 = f(x1);
+    }
+  }
+  return f1 > f2 ? x1 : x2;
+}
+
+/** Points of the profile: band-interval ends on both sides of each level plus interior points. */
+function profilePoints(shear: number, bands: readonly DepthBand[], inertia: number, perBand: number): ShearStressPoint[] {
+  const levels = bandLevels(bands);
+  const out: ShearStressPoint[] = [];
+  for (let i = 0; i < levels.length; i++) {
+    const y = levels[i] as number;
+    const below = widthAt(bands, y, "below");
+    const above = widthAt(bands, y, "above");
+    if (i > 0) out.push(point(shear, bands, inertia, y, below));
+    if (i === 0 || (i < levels.length - 1 && above !== below)) out.push(point(shear, bands, inertia, y, above));
+    const next = levels[i + 1];
+    if (next === undefined) break;
+    for (let k = 1; k < perBand; k++) {
+      const yk = y + ((next - y) * k) / perBand;
+      out.push(point(shear, bands, inertia, yk, widthAt(bands, yk, "above")));
+    }
+  }
+  return out;
+}
+
+function findPeak(shear: number, bands: readonly DepthBand[], inertia: number, samples: readonly ShearStressPoint[]): ShearStressPoint {
+  const ratio = (y: number): number => {
+    const w = widthAt(bands, y, "above");
+    return w > 0 ? firstMomentAbove(bands, y) / w : 0;
+  };
+  let best = samples[0] as ShearStressPoint;
+  let bestIndex = 0;
+  samples.forEach((s, i) => {
+    if (Math.abs(s.stress) > Math.abs(best.stress)) {
+      best = s;
+      bestIndex = i;
+    }
+  });
+  const before = samples[bestIndex - 1];
+  const after = samples[bestIndex + 1];
+  if (before === undefined || after === undefined || before.y === best.y || after.y === best.y) return best;
+  const y = maximise(ratio, before.y, after.y);
+  const refined = point(shear, bands, inertia, y, widthAt(bands, y, "above"));
+  return Math.abs(refined.stress) > Math.abs(best.stress) ? refined : best;
+}
+
+/**
+ * The largest shear stress over the depth of a section, tau = V Q / (I b), and where it acts.
+ * For a rectangle it is 1.5 V / A at the neutral axis, for a solid circle 4 V / (3 A) there,
+ * but for shapes that narrow toward the centroid (a diamond, say) it lies elsewhere; for an I
+ * section it is in the web at the neutral axis. The search brackets the peak between the heights
+ * where the width changes and refines it by golden-section search (to about 1e-13 of the depth).
+ * Source: Roark's Formulas for Stress and Strain, 8th ed., Sec. 8.1 (from memory).
+ *
+ * @param shear - Shear force V (force).
+ * @param bands - The section, y up from its (transformed) centroid.
+ * @param section - `secondMomentZ` (length^4, > 0).
+ * @returns The peak point (stress with the sign of V).
+ * @throws FlexuraError `second-moment-not-positive`, `bands-not-about-centroid`, `bands-no-area`, and the band codes of {@link cutAt}.
+ * @example
+ * ```ts
+ * peakShearStress(30e3, [{ kind: "trapezoid", yBottom: -100, yTop: 100, widthBottom: 100, widthTop: 100 }],
+ *   { secondMomentZ: 100 * 200 ** 3 / 12 }); // { y: 0, stress: 2.25, ... }
+ * ```
+ */
+export function peakShearStress(shear: number, bands: readonly DepthBand[], section: ShearProperties): ShearStressPoint {
+  return shearStressProfile(shear, bands, section).peak;
+}
+
+/**
+ * Non-throwing form of {@link peakShearStress}.
+ *
+ * @example
+ * ```ts
+ * tryPeakShearStress(1, [], { secondMomentZ: 1 }).ok; // false
+ * ```
+ */
+export function tryPeakShearStress(shear: number, bands: readonly DepthBand[], section: ShearProperties): Result<ShearStressPoint> {
+  return attempt(() => peakShearStress(shear, bands, section));
+}
+
+/**
+ * The shear stress over the depth of a section, for plotting, with its peak
+ * (see {@link peakShearStress}).
+ *
+ * @param shear - Shear force V (force).
+ * @param bands - The section, y up from its (transformed) centroid.
+ * @param section - `secondMomentZ` (length^4, > 0).
+ * @param options - Point density; see {@link ShearStressProfileOptions}.
+ * @returns Points bottom to top and the peak.
+ * @throws FlexuraError as {@link peakShearStress}, and `points-per-band-invalid`.
+ * @example
+ * ```ts
+ * shearStressProfile(1, [{ kind: "circle", centreY: 0, radius: 1 }], { secondMomentZ: Math.PI / 4 }).peak.stress; // 4 / (3 pi)
+ * ```
+ */
+export function shearStressProfile(
+  shear: number,
+  bands: readonly DepthBand[],
+  section: ShearProperties,
+  options?: ShearStressProfileOptions,
+): ShearStressProfile {
+  const found = new IssueCollector();
+  validate(shear, bands, section, found);
+  const perBand = options?.pointsPerBand ?? 16;
+  if (!Number.isInteger(perBand) || perBand < 1 || perBand > 1e5) {
+    found.add("points-per-band-invalid", ["options", "pointsPerBand"], `pointsPerBand must be a whole number from 1 to 100000; got ${String(perBand)}.`);
+  }
+  found.throwIfAny();
+  const points = profilePoints(shear, bands, section.secondMomentZ, Math.max(perBand, 16));
+  const peak = findPeak(shear, bands, section.secondMomentZ, points);
+  const shown = perBand >= 16 ? points : profilePoints(shear, bands, section.secondMomentZ, perBand);
+  return { kind: "shear-stress-profile", points: shown, peak };
+}
+
+/**
+ * Non-throwing form of {@link shearStressProfile}.
+ *
+ * @example
+ * ```ts
+ * tryShearStressProfile(1, [], { secondMomentZ: 1 }).ok; // false
+ * ```
+ */
+export function tryShearStressProfile(
+  shear: number,
+  bands: readonly DepthBand[],
+  section: ShearProperties,
+  options?: ShearStressProfileOptions,
+): Result<ShearStressProfile> {
+  return attempt(() => shearStressProfile(shear, bands, section, options));
+}
