@@ -40,7 +40,7 @@ export interface ModelFileUnits {
 
 /** A section as written in a model file: a shape name and its dimensions. */
 export interface ModelFileSection {
-  /** The shape: `"rectangle"`, `"circle"`, `"pipe"`, `"rectangular-hollow"`, `"i-section"`, `"tee"`, `"channel"`, `"angle"`, `"plate-girder"`. */
+  /** The shape: `"rectangle"`, `"circle"`, `"pipe"`, `"i-section"`, `"tee"`. */
   readonly shape: string;
   /** Its dimensions by name (see docs/model-format.md), in the section-length unit or with units. */
   readonly [dimension: string]: ModelQuantity;
