@@ -3,6 +3,7 @@
 import { runAll } from "./harness.js";
 import "./errors.bench.js";
 import "./stress.bench.js";
+import "./model.bench.js";
 
 const pattern = process.argv[2];
 await runAll(pattern ? new RegExp(pattern) : undefined);

@@ -69,17 +69,13 @@ function checkObject(node: Node, value: Json, path: IssuePath, out: FlexuraIssue
   for (const [name, sub] of Object.entries(properties)) {
     if (name in value && value[name] !== undefined) walk(sub, value[name], [...path, name], out, value);
   }
-  const extra = node["additionalProperties"];
-  if (extra === undefined) return;
+  // The schema uses additionalProperties only as `false` (closed objects, so typos are caught).
+  if (node["additionalProperties"] !== false) return;
   for (const name of Object.keys(value)) {
     if (name in properties || value[name] === undefined) continue;
-    if (extra === false) {
-      const near = closestName(name, Object.keys(properties));
-      const hint = near === undefined ? "" : ` Did you mean "${near}"?`;
-      out.push(issue("unknown-field", [...path, name], `Unknown field "${name}"${what === undefined ? "" : ` in ${what}`}.${hint}`, { field: name }));
-    } else {
-      walk(extra as SchemaNode, value[name], [...path, name], out, value);
-    }
+    const near = closestName(name, Object.keys(properties));
+    const hint = near === undefined ? "" : ` Did you mean "${near}"?`;
+    out.push(issue("unknown-field", [...path, name], `Unknown field "${name}"${what === undefined ? "" : ` in ${what}`}.${hint}`, { field: name }));
   }
 }
 
@@ -103,14 +99,14 @@ function walk(schema: SchemaNode, value: unknown, path: IssuePath, out: FlexuraI
     out.push(issue("field-not-allowed", path, `The field "${last(path)}" does not apply${context(parent)}; remove it.`, { field: last(path) }));
     return;
   }
-  const node = schema as Node;
+  const node = schema;
   const target = resolve(node);
   if (target !== undefined) walk(target, value, path, out, parent);
   if (node["type"] !== undefined && !typeMatches(value, node["type"])) {
     out.push(issue("wrong-type", path, `Expected ${expected(node)}; got ${describeValue(value)}.`, { expected: node["type"], value: describeValue(value) }));
     return;
   }
-  if (typeof value === "number" && !Number.isFinite(value)) {
+  if (node["type"] !== undefined && typeof value === "number" && !Number.isFinite(value)) {
     out.push(issue("not-finite", path, `Expected a finite number; got ${String(value)}.`, { value: String(value) }));
   }
   if ("const" in node && value !== node["const"]) {

@@ -1,7 +1,7 @@
 import { readFileSync } from "node:fs";
 import { join } from "node:path";
 import { describe, expect, it } from "vitest";
-import { fc, test } from "@fast-check/vitest";
+import { test } from "@fast-check/vitest";
 import { Ajv2020 } from "ajv/dist/2020.js";
 import { modelSchema } from "../../src/model/schema.js";
 import { structuralIssues } from "../../src/model/validate.js";
