@@ -3,6 +3,8 @@ import { defineConfig } from "tsdown";
 /** One build entry per public module; keep in step with the `exports` map in package.json. */
 export const entries = {
   index: "src/index.ts",
+  beam: "src/beam/entry.ts",
+  section: "src/section/index.ts",
   model: "src/model/index.ts",
   stress: "src/stress/index.ts",
 } as const;

@@ -2,6 +2,8 @@
 // `npm run bench -- <regex>` runs only the benchmarks whose names match.
 import { runAll } from "./harness.js";
 import "./errors.bench.js";
+import "./math.bench.js";
+import "./beam.bench.js";
 import "./stress.bench.js";
 import "./model.bench.js";
 

@@ -7,5 +7,10 @@
  * @packageDocumentation
  */
 export * from "./errors/index.js";
+export * from "./math/index.js";
+export * from "./loads/index.js";
+export * from "./supports/index.js";
+export * from "./beam/index.js";
+export * from "./section/index.js";
 export * from "./model/index.js";
 export * from "./stress/index.js";

@@ -1,5 +1,5 @@
 import { IssueCollector, attempt, requireFinite, type Result } from "../errors/index.js";
-import type { SectionPoint, UnsymmetricBendingProperties } from "./types.js";
+import type { FibrePoint, UnsymmetricBendingProperties } from "./types.js";
 import { checkSecondMoment } from "./validate.js";
 
 /**
@@ -94,7 +94,7 @@ function plane(m: BiaxialMoments, s: UnsymmetricBendingProperties): StressPlane 
   return { perY: perY === 0 ? 0 : perY, perZ: perZ === 0 ? 0 : perZ };
 }
 
-function evaluate(p: StressPlane, point: SectionPoint): number {
+function evaluate(p: StressPlane, point: FibrePoint): number {
   const s = p.perY * point.y + p.perZ * point.z;
   return s === 0 ? 0 : s;
 }
@@ -115,7 +115,7 @@ function evaluate(p: StressPlane, point: SectionPoint): number {
  * // 50 + 10 = 60
  * ```
  */
-export function biaxialBendingStress(moments: BiaxialMoments, point: SectionPoint, section: UnsymmetricBendingProperties): number {
+export function biaxialBendingStress(moments: BiaxialMoments, point: FibrePoint, section: UnsymmetricBendingProperties): number {
   const found = new IssueCollector();
   validate(moments, section, found);
   requireFinite(found, point.y, ["point", "y"], "point's y");
@@ -132,7 +132,7 @@ export function biaxialBendingStress(moments: BiaxialMoments, point: SectionPoin
  * tryBiaxialBendingStress({ momentZ: 1, momentY: 0 }, { y: 0, z: 0 }, { secondMomentZ: 1, secondMomentY: 1, productMoment: 1 }).ok; // false
  * ```
  */
-export function tryBiaxialBendingStress(moments: BiaxialMoments, point: SectionPoint, section: UnsymmetricBendingProperties): Result<number> {
+export function tryBiaxialBendingStress(moments: BiaxialMoments, point: FibrePoint, section: UnsymmetricBendingProperties): Result<number> {
   return attempt(() => biaxialBendingStress(moments, point, section));
 }
 
@@ -146,7 +146,7 @@ export interface NeutralAxis {
    */
   readonly angle: number;
   /** Unit vector along the neutral axis, { y, z }, with z >= 0. */
-  readonly direction: SectionPoint;
+  readonly direction: FibrePoint;
 }
 
 /**

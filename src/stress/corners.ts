@@ -1,13 +1,13 @@
 import { IssueCollector, attempt, requireFinite, type Result } from "../errors/index.js";
 import { bendingStressPlane, type BiaxialMoments } from "./biaxial.js";
-import type { SectionPoint, UnsymmetricBendingProperties } from "./types.js";
+import type { FibrePoint, UnsymmetricBendingProperties } from "./types.js";
 
 /** The stress at one candidate point (a corner) of a section. */
 export interface PointStress {
   /** Index of the point in the list given. */
   readonly index: number;
   /** The point, { y, z } from the centroid (length). */
-  readonly point: SectionPoint;
+  readonly point: FibrePoint;
   /** Normal stress there (force / length^2), tension positive. */
   readonly stress: number;
 }
@@ -45,7 +45,7 @@ export interface CornerStresses {
  * r.tension.index; // 1 (stress 20)
  * ```
  */
-export function cornerStresses(moments: BiaxialMoments, section: UnsymmetricBendingProperties, corners: readonly SectionPoint[]): CornerStresses {
+export function cornerStresses(moments: BiaxialMoments, section: UnsymmetricBendingProperties, corners: readonly FibrePoint[]): CornerStresses {
   const found = new IssueCollector();
   if (corners.length === 0) found.add("no-corners", ["corners"], "Give at least one point of the section at which to find the stress.");
   corners.forEach((c, i) => {
@@ -75,6 +75,6 @@ export function cornerStresses(moments: BiaxialMoments, section: UnsymmetricBend
  * tryCornerStresses({ momentZ: 1, momentY: 0 }, { secondMomentZ: 1, secondMomentY: 1, productMoment: 0 }, []).ok; // false
  * ```
  */
-export function tryCornerStresses(moments: BiaxialMoments, section: UnsymmetricBendingProperties, corners: readonly SectionPoint[]): Result<CornerStresses> {
+export function tryCornerStresses(moments: BiaxialMoments, section: UnsymmetricBendingProperties, corners: readonly FibrePoint[]): Result<CornerStresses> {
   return attempt(() => cornerStresses(moments, section, corners));
 }

@@ -1,4 +1,4 @@
-export type { FibreExtremes, BendingProperties, BendingPropertiesWithExtremes, UnsymmetricBendingProperties, SectionPoint, ExtremeFibre, FibreStress } from "./types.js";
+export type { FibreExtremes, BendingProperties, BendingPropertiesWithExtremes, UnsymmetricBendingProperties, FibrePoint, ExtremeFibre, FibreStress } from "./types.js";
 export { bendingStress, tryBendingStress, bendingStressFromModulus, tryBendingStressFromModulus } from "./flexure.js";
 export type { ExtremeBendingStresses } from "./extreme.js";
 export { extremeBendingStresses, tryExtremeBendingStresses } from "./extreme.js";

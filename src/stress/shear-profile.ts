@@ -1,6 +1,7 @@
 import { IssueCollector, attempt, requireFinite, type Result } from "../errors/index.js";
 import { bandLevels, checkBands, firstMomentAbove, widthAt, type DepthBand } from "./bands.js";
 import type { ShearProperties } from "./shear.js";
+import { findPeak, pointAt, profilePoints, type CutSource } from "./shear-peak.js";
 import { checkSecondMoment } from "./validate.js";
 
 /** The shear stress at one height of a section. */
@@ -39,6 +40,11 @@ function area(band: DepthBand): number {
   return band.kind === "trapezoid" ? (n * (band.widthBottom + band.widthTop) * (band.yTop - band.yBottom)) / 2 : n * Math.PI * band.radius * band.radius;
 }
 
+/** The bands seen as a {@link CutSource}. */
+function bandSource(bands: readonly DepthBand[]): CutSource {
+  return { levels: bandLevels(bands), firstMoment: (y) => firstMomentAbove(bands, y), width: (y, side) => widthAt(bands, y, side) };
+}
+
 function validate(shear: number, bands: readonly DepthBand[], section: ShearProperties, found: IssueCollector): void {
   requireFinite(found, shear, ["shear"], "shear force");
   checkSecondMoment(found, section.secondMomentZ, ["section", "secondMomentZ"]);
@@ -57,12 +63,6 @@ function validate(shear: number, bands: readonly DepthBand[], section: ShearProp
       { centroidY: moment / total },
     );
   }
-}
-
-function point(shear: number, bands: readonly DepthBand[], inertia: number, y: number, width: number): ShearStressPoint {
-  const q = firstMomentAbove(bands, y) + 0;
-  const stress = width > 0 ? (shear * q) / (inertia * width) + 0 : 0;
-  return { y, stress, firstMoment: q, width };
 }
 
 /**
@@ -99,7 +99,7 @@ export function shearStressAt(shear: number, y: number, bands: readonly DepthBan
     found.add("width-not-positive", ["y"], `There is no material at y = ${y} (a gap between parts): cut through the section.`, { y });
   }
   found.throwIfAny();
-  return point(shear, bands, section.secondMomentZ, y, width);
+  return pointAt(shear, bandSource(bands), section.secondMomentZ, y, width);
 }
 
 /**
@@ -112,75 +112,6 @@ export function shearStressAt(shear: number, y: number, bands: readonly DepthBan
  */
 export function tryShearStressAt(shear: number, y: number, bands: readonly DepthBand[], section: ShearProperties): Result<ShearStressPoint> {
   return attempt(() => shearStressAt(shear, y, bands, section));
-}
-
-const GOLDEN = (Math.sqrt(5) - 1) / 2;
-
-/** Maximises f on [a, b] by golden-section search to near machine precision. */
-function maximise(f: (y: number) => number, a: number, b: number): number {
-  let lo = a;
-  let hi = b;
-  let x1 = hi - GOLDEN * (hi - lo);
-  let x2 = lo + GOLDEN * (hi - lo);
-  let f1 = f(x1);
-  let f2 = f(x2);
-  for (let i = 0; i < 200 && hi - lo > 1e-13 * (Math.abs(lo) + Math.abs(hi) + 1e-300); i++) {
-    if (f1 < f2) {
-      lo = x1;
-      x1 = x2;
-      f1 = f2;
-      x2 = lo + GOLDEN * (hi - lo);
-      f2 = f(x2);
-    } else {
-      hi = x2;
-      x2 = x1;
-      f2 = f1;
-      x1 = hi - GOLDEN * (hi - lo);
-      f1 = f(x1);
-    }
-  }
-  return f1 > f2 ? x1 : x2;
-}
-
-/** Points of the profile: band-interval ends on both sides of each level plus interior points. */
-function profilePoints(shear: number, bands: readonly DepthBand[], inertia: number, perBand: number): ShearStressPoint[] {
-  const levels = bandLevels(bands);
-  const out: ShearStressPoint[] = [];
-  for (let i = 0; i < levels.length; i++) {
-    const y = levels[i] as number;
-    const below = widthAt(bands, y, "below");
-    const above = widthAt(bands, y, "above");
-    if (i > 0) out.push(point(shear, bands, inertia, y, below));
-    if (i === 0 || (i < levels.length - 1 && above !== below)) out.push(point(shear, bands, inertia, y, above));
-    const next = levels[i + 1];
-    if (next === undefined) break;
-    for (let k = 1; k < perBand; k++) {
-      const yk = y + ((next - y) * k) / perBand;
-      out.push(point(shear, bands, inertia, yk, widthAt(bands, yk, "above")));
-    }
-  }
-  return out;
-}
-
-function findPeak(shear: number, bands: readonly DepthBand[], inertia: number, samples: readonly ShearStressPoint[]): ShearStressPoint {
-  const ratio = (y: number): number => {
-    const w = widthAt(bands, y, "above");
-    return w > 0 ? firstMomentAbove(bands, y) / w : 0;
-  };
-  let best = samples[0] as ShearStressPoint;
-  let bestIndex = 0;
-  samples.forEach((s, i) => {
-    if (Math.abs(s.stress) > Math.abs(best.stress)) {
-      best = s;
-      bestIndex = i;
-    }
-  });
-  const before = samples[bestIndex - 1];
-  const after = samples[bestIndex + 1];
-  if (before === undefined || after === undefined || before.y === best.y || after.y === best.y) return best;
-  const y = maximise(ratio, before.y, after.y);
-  const refined = point(shear, bands, inertia, y, widthAt(bands, y, "above"));
-  return Math.abs(refined.stress) > Math.abs(best.stress) ? refined : best;
 }
 
 /**
@@ -246,9 +177,10 @@ export function shearStressProfile(
     found.add("points-per-band-invalid", ["options", "pointsPerBand"], `pointsPerBand must be a whole number from 1 to 100000; got ${String(perBand)}.`);
   }
   found.throwIfAny();
-  const points = profilePoints(shear, bands, section.secondMomentZ, Math.max(perBand, 16));
-  const peak = findPeak(shear, bands, section.secondMomentZ, points);
-  const shown = perBand >= 16 ? points : profilePoints(shear, bands, section.secondMomentZ, perBand);
+  const source = bandSource(bands);
+  const points = profilePoints(shear, source, section.secondMomentZ, Math.max(perBand, 16));
+  const peak = findPeak(shear, source, section.secondMomentZ, points);
+  const shown = perBand >= 16 ? points : profilePoints(shear, source, section.secondMomentZ, perBand);
   return { kind: "shear-stress-profile", points: shown, peak };
 }
 

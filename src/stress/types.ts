@@ -46,7 +46,7 @@ export interface UnsymmetricBendingProperties {
 }
 
 /** A point of the section plane: y up and z horizontal, measured from the centroid (length). */
-export interface SectionPoint {
+export interface FibrePoint {
   /** Vertical coordinate, up from the centroid (length). */
   readonly y: number;
   /** Horizontal coordinate from the centroid (length). */

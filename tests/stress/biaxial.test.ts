@@ -9,7 +9,7 @@ import {
   tryBiaxialBendingStress,
   tryCornerStresses,
   tryNeutralAxis,
-  type SectionPoint,
+  type FibrePoint,
 } from "../../src/stress/index.js";
 import { simpson } from "./helpers.js";
 
@@ -62,7 +62,7 @@ describe("unsymmetric bending: an angle under a vertical load", () => {
   const boxes = angle(150, 100, 10);
   const p = boxProperties(boxes);
   const m = { momentZ: 8e6, momentY: 0 };
-  const corners: SectionPoint[] = [
+  const corners: FibrePoint[] = [
     { z: 0, y: 0 },
     { z: 100, y: 0 },
     { z: 100, y: 10 },

@@ -1,0 +1,111 @@
+import { evaluatePolynomial, polynomialRootsIn, type PiecewisePolynomial } from "../math/index.js";
+import { restrainsDeflection, type Support } from "../supports/index.js";
+import type { BeamModel } from "./model.js";
+import type { BeamSpan, BeamWarning } from "./types.js";
+
+/**
+ * Points where the moment changes sign, excluding the ends: on each piece the real roots split
+ * it into stretches of one sign (judged at each stretch's midpoint); a sign change between
+ * neighbouring stretches is a point of contraflexure. Stretches whose moment is zero to
+ * rounding (relative to the largest moment) are skipped, so an unloaded overhang or a hinge
+ * where the moment only touches zero gives none. A jump across zero at an applied couple counts.
+ */
+export function contraflexurePoints(moment: PiecewisePolynomial, scale: number): number[] {
+  const b = moment.breaks;
+  const c = moment.coefficients;
+  const d = moment.degree;
+  const stride = d + 1;
+  const zero = 1e-10 * scale;
+  const gap = 1e-8 * ((b[b.length - 1] as number) - (b[0] as number));
+  const out: number[] = [];
+  const roots: number[] = [];
+  let lastSign = 0;
+  let lastEnd = 0;
+  for (let i = 0; i + 1 < b.length; i++) {
+    const x0 = b[i] as number;
+    const h = (b[i + 1] as number) - x0;
+    roots.length = 0;
+    polynomialRootsIn(c, i * stride, d, 0, h, roots);
+    let start = 0;
+    for (let r = 0; r <= roots.length; r++) {
+      const end = r < roots.length ? (roots[r] as number) : h;
+      if (end > start) {
+        const v = evaluatePolynomial(c, i * stride, d, 0.5 * (start + end));
+        const sign = v > zero ? 1 : v < -zero ? -1 : 0;
+        if (sign !== 0) {
+          const here = x0 + start;
+          if (lastSign !== 0 && sign !== lastSign && here - lastEnd <= gap) out.push(0.5 * (here + lastEnd));
+          lastSign = sign;
+          lastEnd = x0 + end;
+        }
+      }
+      start = end;
+    }
+  }
+  return out;
+}
+
+/** The spans between supports that hold deflection, and the cantilevers beyond the outermost ones. */
+export function spansOf(length: number, supports: readonly Support[]): BeamSpan[] {
+  const at = supports
+    .filter(restrainsDeflection)
+    .map((s) => s.at)
+    .sort((a, b) => a - b);
+  const out: BeamSpan[] = [];
+  const first = at[0] as number;
+  const last = at[at.length - 1] as number;
+  const tiny = 1e-10 * length;
+  if (first > tiny) out.push(Object.freeze({ from: 0, to: first, kind: "cantilever" }));
+  for (let i = 1; i < at.length; i++) out.push(Object.freeze({ from: at[i - 1] as number, to: at[i] as number, kind: "span" }));
+  if (last < length - tiny) out.push(Object.freeze({ from: last, to: length, kind: "cantilever" }));
+  return out;
+}
+
+/**
+ * Warnings about numbers float64 may not resolve: springs far stiffer or softer than the member
+ * around them, and small pivots in the factorisation.
+ */
+export function conditioningWarnings(model: BeamModel, supports: readonly Support[], pivotRatio: number): BeamWarning[] {
+  const out: BeamWarning[] = [];
+  const last = model.nodes - 1;
+  for (let s = 0; s < supports.length; s++) {
+    const sup = supports[s] as Support;
+    if (sup.kind !== "spring") continue;
+    const node = model.supportNode[s] as number;
+    let kv = 0;
+    let kr = 0;
+    for (const e of [node - 1, node]) {
+      if (e < 0 || e >= last) continue;
+      const h = (model.x[e + 1] as number) - (model.x[e] as number);
+      const ei = model.ei[e] as number;
+      kv += (12 * ei) / (h * h * h);
+      kr += (4 * ei) / h;
+    }
+    for (const [value, member, field] of [
+      [sup.stiffness, kv, "stiffness"],
+      [sup.rotationalStiffness, kr, "rotationalStiffness"],
+    ] as const) {
+      if (value === undefined) continue;
+      const ratio = value / member;
+      if (ratio > 1e11 || ratio < 1e-11)
+        out.push(
+          Object.freeze({
+            code: "ill-conditioned",
+            message: `The spring at x = ${sup.at} is ${ratio.toExponential(1)} times as stiff as the member there; float64 cannot resolve the two together, so results near it may be inaccurate. ${ratio > 1 ? "Use a rigid support instead." : "Check the spring stiffness."}`,
+            support: s,
+            field,
+            ratio,
+          }),
+        );
+    }
+  }
+  if (pivotRatio < 1e-9)
+    out.push(
+      Object.freeze({
+        code: "ill-conditioned",
+        message: `The stiffness system is badly conditioned: about ${Math.round(-Math.log10(pivotRatio))} of float64's 16 significant digits may be lost.`,
+        pivotRatio,
+      }),
+    );
+  return out;
+}

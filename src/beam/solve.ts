@@ -1,0 +1,90 @@
+import { attempt, type Result } from "../errors/index.js";
+import { loadResultant } from "../loads/index.js";
+import { extremesOf } from "../math/index.js";
+import { buildModel } from "./model.js";
+import { recoverDiagrams, recoverReactions } from "./recover.js";
+import { conditioningWarnings, contraflexurePoints, spansOf } from "./results.js";
+import { checkStability } from "./stability.js";
+import { solveStiffness } from "./stiffness.js";
+import type { BeamInput, BeamSolution, SolveOptions } from "./types.js";
+import { validateBeam } from "./validate.js";
+
+/**
+ * Solves a straight member, determinate or not, by the direct stiffness method (two degrees of
+ * freedom per node, exact fixed-end actions, a banded O(n) solve), then recovers shear, moment,
+ * slope and deflection exactly on every element as piecewise polynomials, with their peaks.
+ *
+ * Conventions: x from the left end; loads down positive, couples counterclockwise positive;
+ * reactions up and counterclockwise positive; moment positive sagging; shear V = dM/dx; slope
+ * counterclockwise positive; deflection up positive; settlements down positive. Units: any
+ * consistent set (force F, length L): E I in F L^2, distributed loads in F / L, spring stiffness
+ * in F / L and F L per radian.
+ *
+ * Method: the stiffness and fixed-end actions of a prismatic Euler-Bernoulli element (for
+ * example Weaver & Gere, Matrix Analysis of Framed Structures, 3rd ed., ch. 4 and appendix B;
+ * McGuire, Gallagher & Ziemian, Matrix Structural Analysis, 2nd ed., ch. 4 and 7).
+ *
+ * @throws FlexuraError with every input problem at once (`length-not-positive`,
+ *   `stiffness-not-positive`, `stiffness-not-tiling`, `load-outside-member`, `support-duplicate`,
+ *   `not-finite`, ...; see docs/errors.md), or a `mechanism` / `no-horizontal-restraint` for a
+ *   member its supports cannot hold.
+ * @example
+ * ```ts
+ * // 6 m simple span, uniform 5 kN/m, E I = 20,000 kN m^2
+ * const s = solveBeam({
+ *   length: 6,
+ *   stiffness: 20000,
+ *   supports: [{ kind: "pin", at: 0 }, { kind: "roller", at: 6 }],
+ *   loads: [{ kind: "distributed", from: 0, to: 6, start: 5, end: 5 }],
+ * });
+ * s.reactions[0].force;        // 15 (kN, up)
+ * s.peaks.moment.max;          // { value: 22.5, at: 3 } (kN m, sagging)
+ * s.peaks.deflection.min.value; // -5 * 5 * 6^4 / (384 * 20000) = -0.00421875 m
+ * ```
+ */
+export function solveBeam(beam: BeamInput, options?: SolveOptions): BeamSolution {
+  validateBeam(beam, options);
+  checkStability(beam.length, beam.supports, beam.hinges ?? []);
+  const model = buildModel(beam, options);
+  const result = solveStiffness(model, beam.supports);
+  const diagrams = recoverDiagrams(model, result);
+  const reactions = recoverReactions(model, result, beam.supports);
+  const resultant = loadResultant(model.loads);
+  let force = -resultant.force;
+  let moment = resultant.moment;
+  for (const r of reactions) {
+    force += r.force;
+    moment += r.force * r.at + r.moment;
+  }
+  const peaks = {
+    shear: extremesOf(diagrams.shear),
+    moment: extremesOf(diagrams.moment),
+    slope: extremesOf(diagrams.slope),
+    deflection: extremesOf(diagrams.deflection),
+  };
+  const scale = Math.max(Math.abs(peaks.moment.max.value), Math.abs(peaks.moment.min.value));
+  return Object.freeze({
+    length: beam.length,
+    reactions: Object.freeze(reactions),
+    ...diagrams,
+    peaks: Object.freeze(peaks),
+    contraflexure: Object.freeze(contraflexurePoints(diagrams.moment, scale)),
+    residual: Object.freeze({ force, moment }),
+    warnings: Object.freeze(conditioningWarnings(model, beam.supports, result.pivotRatio)),
+    spans: Object.freeze(spansOf(beam.length, beam.supports)),
+  });
+}
+
+/**
+ * The non-throwing form of {@link solveBeam}: `{ ok: true, value }` with the solution, or
+ * `{ ok: false, error }` with every problem found.
+ *
+ * @example
+ * ```ts
+ * const r = trySolveBeam({ length: 0, stiffness: 1, supports: [] });
+ * if (!r.ok) console.log(r.error.issues.map((i) => i.code)); // ["length-not-positive"]
+ * ```
+ */
+export function trySolveBeam(beam: BeamInput, options?: SolveOptions): Result<BeamSolution> {
+  return attempt(() => solveBeam(beam, options));
+}

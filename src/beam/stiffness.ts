@@ -1,0 +1,163 @@
+import { FlexuraError, issue } from "../errors/index.js";
+import { factorBandedSymmetric, solveBandedSymmetric } from "../math/index.js";
+import type { Support } from "../supports/index.js";
+import type { BeamModel } from "./model.js";
+
+/** Half-bandwidth of the stiffness matrix with DOFs ordered (v0, theta0, v1, theta1, ...). */
+const W = 3;
+const S = W + 1;
+
+/** Nodal displacements and element end forces. */
+export interface StiffnessResult {
+  /** Displacements: deflection (up) and rotation (ccw) of each node, interleaved. */
+  readonly displacements: Float64Array;
+  /** Forces on each element from its nodes: [Q left (up), M left (ccw), Q right, M right]. */
+  readonly endForces: Float64Array;
+  /** Smallest pivot over original diagonal met in the factorisation (1 is perfect). */
+  readonly pivotRatio: number;
+}
+
+// scratch element matrix (upper triangle of 4x4, row-major full) and clamp forces
+const k = new Float64Array(16);
+const f = new Float64Array(4);
+
+/** Fills `k` and `f` for element e (fixed-end forces of its linear load; condensed when released). */
+function elementMatrices(model: BeamModel, e: number): void {
+  const h = (model.x[e + 1] as number) - (model.x[e] as number);
+  const a = (model.ei[e] as number) / (h * h * h);
+  const k00 = 12 * a;
+  const k01 = 6 * a * h;
+  const k11 = 4 * a * h * h;
+  const k13 = 2 * a * h * h;
+  k[0] = k00; k[1] = k01; k[2] = -k00; k[3] = k01;
+  k[5] = k11; k[6] = -k01; k[7] = k13;
+  k[10] = k00; k[11] = -k01;
+  k[15] = k11;
+  k[4] = k01; k[8] = -k00; k[9] = -k01; k[12] = k01; k[13] = k13; k[14] = -k01;
+  // clamp forces for w(t) = w1 + (w2 - w1) t / h, downward: uniform part plus triangular part
+  const w1 = model.wLeft[e] as number;
+  const dw = (model.wRight[e] as number) - w1;
+  f[0] = (w1 * h) / 2 + (3 * dw * h) / 20;
+  f[1] = (w1 * h * h) / 12 + (dw * h * h) / 30;
+  f[2] = (w1 * h) / 2 + (7 * dw * h) / 20;
+  f[3] = -((w1 * h * h) / 12 + (dw * h * h) / 20);
+  if (model.released[e] === 1) {
+    // static condensation of the right-end rotation: its end moment is zero
+    const k33 = k[15];
+    const f3 = f[3];
+    for (let i = 0; i < 3; i++) {
+      const ki3 = k[i * 4 + 3] as number;
+      for (let j = 0; j < 3; j++) k[i * 4 + j] = (k[i * 4 + j] as number) - (ki3 * (k[j * 4 + 3] as number)) / k33;
+      f[i] = (f[i] as number) - (ki3 * f3) / k33;
+    }
+    for (let i = 0; i < 4; i++) k[i * 4 + 3] = k[12 + i] = 0;
+    f[3] = 0;
+  }
+}
+
+/**
+ * Assembles and solves the banded stiffness system of a member: elements, nodal loads,
+ * springs, prescribed settlements and rotations; then the end forces of each element.
+ *
+ * @throws FlexuraError `mechanism` when a pivot vanishes (a member the rigid-body check passed
+ *   but float64 cannot hold, such as one resting only on vanishingly soft springs).
+ */
+export function solveStiffness(model: BeamModel, supports: readonly Support[]): StiffnessResult {
+  const n = model.nodes;
+  const N = 2 * n;
+  const elements = n - 1;
+  const band = new Float64Array(N * S);
+  const rhs = new Float64Array(N);
+  for (let e = 0; e < elements; e++) {
+    elementMatrices(model, e);
+    const base = 2 * e;
+    for (let i = 0; i < 4; i++) {
+      const row = (base + i) * S;
+      for (let j = i; j < 4; j++) band[row + j - i] = (band[row + j - i] as number) + (k[i * 4 + j] as number);
+      rhs[base + i] = (rhs[base + i] as number) - (f[i] as number);
+    }
+  }
+  for (let i = 0; i < n; i++) {
+    rhs[2 * i] = (rhs[2 * i] as number) - (model.force[i] as number);
+    rhs[2 * i + 1] = (rhs[2 * i + 1] as number) + (model.couple[i] as number);
+  }
+  // supports: springs on the diagonal, rigid restraints as prescribed values
+  const prescribed = new Uint8Array(N);
+  const value = new Float64Array(N);
+  for (let s = 0; s < supports.length; s++) {
+    const sup = supports[s] as Support;
+    const node = model.supportNode[s] as number;
+    const v = 2 * node;
+    const settle = -(sup.settlement ?? 0);
+    const turn = sup.rotation ?? 0;
+    switch (sup.kind) {
+      case "pin":
+      case "roller":
+        prescribed[v] = 1;
+        value[v] = settle;
+        break;
+      case "fixed":
+        prescribed[v] = 1;
+        value[v] = settle;
+        prescribed[v + 1] = 1;
+        value[v + 1] = turn;
+        break;
+      case "guided":
+        prescribed[v + 1] = 1;
+        value[v + 1] = turn;
+        break;
+      case "spring":
+        if (sup.stiffness !== undefined) {
+          band[v * S] = (band[v * S] as number) + sup.stiffness;
+          rhs[v] = (rhs[v] as number) + sup.stiffness * settle;
+        }
+        if (sup.rotationalStiffness !== undefined) {
+          band[(v + 1) * S] = (band[(v + 1) * S] as number) + sup.rotationalStiffness;
+          rhs[v + 1] = (rhs[v + 1] as number) + sup.rotationalStiffness * turn;
+        }
+        break;
+      default:
+        return sup.kind satisfies never;
+    }
+  }
+  for (let i = 0; i < N; i++) {
+    if (prescribed[i] !== 1) continue;
+    const u = value[i] as number;
+    if (u === 0) continue;
+    for (let j = Math.max(0, i - W); j <= Math.min(N - 1, i + W); j++) {
+      if (j === i || prescribed[j] === 1) continue;
+      const kji = j < i ? (band[j * S + i - j] as number) : (band[i * S + j - i] as number);
+      rhs[j] = (rhs[j] as number) - kji * u;
+    }
+  }
+  for (let i = 0; i < N; i++) {
+    if (prescribed[i] !== 1) continue;
+    for (let j = Math.max(0, i - W); j < i; j++) band[j * S + i - j] = 0;
+    for (let j = 1; j < S; j++) band[i * S + j] = 0;
+    band[i * S] = 1;
+    rhs[i] = value[i] as number;
+  }
+  const report = factorBandedSymmetric(band, N, W, 1e-14);
+  if (report.singularAt >= 0) {
+    const node = report.singularAt >> 1;
+    const at = model.x[node] as number;
+    throw new FlexuraError([
+      issue("mechanism", ["supports"], `The member cannot be held near x = ${at}: its supports are too soft for float64 to resolve. Stiffen the springs or add a rigid support.`, {
+        reason: "singular",
+        at,
+      }),
+    ]);
+  }
+  const d = solveBandedSymmetric(band, N, W, rhs);
+  const endForces = new Float64Array(4 * elements);
+  for (let e = 0; e < elements; e++) {
+    elementMatrices(model, e);
+    const base = 2 * e;
+    for (let i = 0; i < 4; i++) {
+      let q = f[i] as number;
+      for (let j = 0; j < 4; j++) q += (k[i * 4 + j] as number) * (d[base + j] as number);
+      endForces[4 * e + i] = q;
+    }
+  }
+  return { displacements: d, endForces, pivotRatio: report.smallestPivotRatio };
+}

@@ -1,0 +1,201 @@
+import { fail } from "../errors/index.js";
+import { evaluatePolynomial } from "./polynomial.js";
+
+/**
+ * A piecewise polynomial on typed arrays: piece `i` covers `[breaks[i], breaks[i+1]]` and equals
+ * `sum_k coefficients[i * (degree + 1) + k] * (x - breaks[i])^k` there (a local basis, which keeps
+ * full precision far from x = 0).
+ *
+ * Treat it as immutable: flexura never changes one after building it, and the typed arrays
+ * must not be written to by callers either.
+ *
+ * @example
+ * ```ts
+ * // 2x on [0, 1], then 2 - (x - 1) on [1, 3]
+ * const pp = piecewisePolynomial([0, 1, 3], [0, 2, 2, -1], 1);
+ * evaluatePiecewise(pp, 2); // 1
+ * ```
+ */
+export interface PiecewisePolynomial {
+  /** Tag: always `"piecewise-polynomial"`. */
+  readonly kind: "piecewise-polynomial";
+  /** Highest power on every piece (some pieces may have zero leading coefficients). */
+  readonly degree: number;
+  /** Strictly increasing breakpoints, one more than the number of pieces (x units). */
+  readonly breaks: Float64Array;
+  /** Coefficients, `degree + 1` per piece, lowest power first, in powers of `x - breaks[i]`. */
+  readonly coefficients: Float64Array;
+}
+
+/** Which one-sided limit to take at a breakpoint where the function may jump. */
+export type PiecewiseSide = "left" | "right";
+
+/**
+ * Builds a piecewise polynomial from breakpoints and local-basis coefficients (copied).
+ *
+ * @param breaks - strictly increasing breakpoints (at least two).
+ * @param coefficients - `degree + 1` coefficients per piece, lowest power first, in powers of `x - breaks[i]`.
+ * @param degree - highest power, 0 to 8.
+ * @throws FlexuraError `piecewise-invalid` when the breakpoints are not strictly increasing and finite,
+ *   the degree is not an integer from 0 to 8, or the number of coefficients does not match.
+ * @example
+ * ```ts
+ * const line = piecewisePolynomial([0, 4], [1, 0.5], 1); // 1 + x / 2 on [0, 4]
+ * ```
+ */
+export function piecewisePolynomial(breaks: ArrayLike<number>, coefficients: ArrayLike<number>, degree: number): PiecewisePolynomial {
+  if (!Number.isInteger(degree) || degree < 0 || degree > 8) fail("piecewise-invalid", ["degree"], `The degree must be an integer from 0 to 8; got ${degree}.`);
+  if (breaks.length < 2) fail("piecewise-invalid", ["breaks"], "A piecewise polynomial needs at least two breakpoints.");
+  for (let i = 0; i < breaks.length; i++) {
+    const b = breaks[i] as number;
+    if (!Number.isFinite(b) || (i > 0 && !(b > (breaks[i - 1] as number))))
+      fail("piecewise-invalid", ["breaks", i], "Breakpoints must be finite and strictly increasing.");
+  }
+  const pieces = breaks.length - 1;
+  if (coefficients.length !== pieces * (degree + 1))
+    fail("piecewise-invalid", ["coefficients"], `Expected ${pieces * (degree + 1)} coefficients (${degree + 1} per piece); got ${coefficients.length}.`);
+  for (let i = 0; i < coefficients.length; i++)
+    if (!Number.isFinite(coefficients[i])) fail("piecewise-invalid", ["coefficients", i], "Coefficients must be finite.");
+  return Object.freeze({ kind: "piecewise-polynomial", degree, breaks: Float64Array.from(breaks), coefficients: Float64Array.from(coefficients) });
+}
+
+/** Builds without checks or copies; for flexura's own kernels, which guarantee the invariants. */
+export function makePiecewise(breaks: Float64Array, coefficients: Float64Array, degree: number): PiecewisePolynomial {
+  return Object.freeze({ kind: "piecewise-polynomial", degree, breaks, coefficients });
+}
+
+/**
+ * The number of pieces.
+ *
+ * @example
+ * ```ts
+ * pieceCount(piecewisePolynomial([0, 1, 3], [0, 2, 2, -1], 1)); // 2
+ * ```
+ */
+export function pieceCount(pp: PiecewisePolynomial): number {
+  return pp.breaks.length - 1;
+}
+
+/**
+ * Index of the piece that holds `x`; at a breakpoint, `side` picks the piece to its left or right.
+ * Assumes `x` lies in the domain (clamps otherwise).
+ *
+ * @example
+ * ```ts
+ * findPiece(piecewisePolynomial([0, 1, 3], [0, 2, 2, -1], 1), 1, "left"); // 0
+ * ```
+ */
+export function findPiece(pp: PiecewisePolynomial, x: number, side: PiecewiseSide = "right"): number {
+  const b = pp.breaks;
+  let lo = 0;
+  let hi = b.length - 2;
+  if (side === "right") {
+    // last piece whose start is <= x
+    while (lo < hi) {
+      const mid = (lo + hi + 1) >> 1;
+      if ((b[mid] as number) <= x) lo = mid;
+      else hi = mid - 1;
+    }
+  } else {
+    // first piece whose end is >= x
+    while (lo < hi) {
+      const mid = (lo + hi) >> 1;
+      if ((b[mid + 1] as number) >= x) hi = mid;
+      else lo = mid + 1;
+    }
+  }
+  return lo;
+}
+
+/**
+ * Value at `x`. At a breakpoint where the function jumps, `side` chooses the limit from the
+ * left or from the right (default `"right"`; at the last breakpoint the right limit does not
+ * exist and the left one is returned).
+ *
+ * @throws FlexuraError `outside-domain` when `x` is not a number within `[breaks[0], breaks[last]]`.
+ * @example
+ * ```ts
+ * const step = piecewisePolynomial([0, 1, 2], [1, 3], 0);
+ * evaluatePiecewise(step, 1, "left"); // 1
+ * evaluatePiecewise(step, 1); // 3
+ * ```
+ */
+export function evaluatePiecewise(pp: PiecewisePolynomial, x: number, side: PiecewiseSide = "right"): number {
+  const b = pp.breaks;
+  if (!(x >= (b[0] as number) && x <= (b[b.length - 1] as number)))
+    fail("outside-domain", ["x"], `x = ${x} lies outside [${b[0]}, ${b[b.length - 1]}].`, { x });
+  const i = findPiece(pp, x, side);
+  const stride = pp.degree + 1;
+  return evaluatePolynomial(pp.coefficients, i * stride, pp.degree, x - (b[i] as number));
+}
+
+/**
+ * Values at many points into `out` (allocated when not given). Points may come in any order,
+ * but sorted points are fastest: the piece search then walks forward. At a breakpoint the
+ * right-hand limit is taken (the left-hand one at the last breakpoint).
+ *
+ * @throws FlexuraError `outside-domain` when a point lies outside the domain or is NaN.
+ * @example
+ * ```ts
+ * const pp = piecewisePolynomial([0, 2], [0, 0, 1], 2); // x^2
+ * evaluatePiecewiseMany(pp, Float64Array.of(0, 1, 2)); // Float64Array [0, 1, 4]
+ * ```
+ */
+export function evaluatePiecewiseMany(pp: PiecewisePolynomial, xs: ArrayLike<number>, out?: Float64Array): Float64Array {
+  const n = xs.length;
+  const result = out ?? new Float64Array(n);
+  const b = pp.breaks;
+  const c = pp.coefficients;
+  const d = pp.degree;
+  const stride = d + 1;
+  const last = b.length - 2;
+  const x0 = b[0] as number;
+  const x1 = b[last + 1] as number;
+  let i = 0;
+  for (let j = 0; j < n; j++) {
+    const x = xs[j] as number;
+    if (!(x >= x0 && x <= x1)) fail("outside-domain", ["xs", j], `x = ${x} lies outside [${x0}, ${x1}].`, { x });
+    if (x < (b[i] as number)) i = findPiece(pp, x, "right");
+    while (i < last && x >= (b[i + 1] as number)) i++;
+    const o = i * stride;
+    const t = x - (b[i] as number);
+    let v = c[o + d] as number;
+    for (let k = d - 1; k >= 0; k--) v = v * t + (c[o + k] as number);
+    result[j] = v;
+  }
+  return result;
+}
+
+/** One piece, for plotting or export: the polynomial in powers of `x - from`. */
+export interface PolynomialPiece {
+  /** Start of the piece (x units). */
+  readonly from: number;
+  /** End of the piece (x units). */
+  readonly to: number;
+  /** Coefficients in powers of `x - from`, lowest first (a copy). */
+  readonly coefficients: readonly number[];
+}
+
+/**
+ * The pieces as plain objects (copies), for plotting or export.
+ *
+ * @example
+ * ```ts
+ * piecesOf(piecewisePolynomial([0, 1, 3], [0, 2, 2, -1], 1));
+ * // [{ from: 0, to: 1, coefficients: [0, 2] }, { from: 1, to: 3, coefficients: [2, -1] }]
+ * ```
+ */
+export function piecesOf(pp: PiecewisePolynomial): readonly PolynomialPiece[] {
+  const stride = pp.degree + 1;
+  const out: PolynomialPiece[] = [];
+  for (let i = 0; i + 1 < pp.breaks.length; i++) {
+    out.push(
+      Object.freeze({
+        from: pp.breaks[i] as number,
+        to: pp.breaks[i + 1] as number,
+        coefficients: Object.freeze(Array.from(pp.coefficients.subarray(i * stride, (i + 1) * stride))),
+      }),
+    );
+  }
+  return Object.freeze(out);
+}

@@ -1,0 +1,164 @@
+// Polynomials stored as coefficient runs inside a Float64Array: c[off + k] multiplies t^k.
+
+/**
+ * Evaluates the polynomial `c[off] + c[off+1] t + ... + c[off+degree] t^degree` at `t` by
+ * Horner's rule.
+ *
+ * @param coefficients - coefficient storage; lowest power first.
+ * @param offset - index of the constant term.
+ * @param degree - highest power (0 for a constant).
+ * @param t - the argument.
+ * @returns the value of the polynomial.
+ * @example
+ * ```ts
+ * evaluatePolynomial(new Float64Array([1, 0, 2]), 0, 2, 3); // 1 + 2 * 9 = 19
+ * ```
+ */
+export function evaluatePolynomial(coefficients: ArrayLike<number>, offset: number, degree: number, t: number): number {
+  let v = coefficients[offset + degree] as number;
+  for (let k = degree - 1; k >= 0; k--) v = v * t + (coefficients[offset + k] as number);
+  return v;
+}
+
+/** Scratch storage for derivative coefficients and roots, one run per recursion level. */
+const MAX_DEGREE = 8;
+const derivativeScratch = new Float64Array((MAX_DEGREE + 1) * (MAX_DEGREE + 1));
+const rootScratch = new Float64Array((MAX_DEGREE + 2) * (MAX_DEGREE + 2));
+
+/**
+ * Finds the real roots of a polynomial in the closed interval `[lo, hi]`, in increasing order.
+ *
+ * Degree 1 and 2 use closed forms (the quadratic in its cancellation-free form); higher degrees
+ * isolate each root between consecutive roots of the derivative (found recursively), where the
+ * polynomial is monotone, and then converge by a bracketed false-position method with the
+ * Illinois modification and a bisection safeguard, which always converges. A root where the
+ * polynomial only touches zero (even multiplicity) is reported when the value at the
+ * derivative's root is zero to rounding. A polynomial that is identically zero has no isolated
+ * roots and returns none.
+ *
+ * @param coefficients - coefficient storage; lowest power first.
+ * @param offset - index of the constant term.
+ * @param degree - highest power; at most 8.
+ * @param lo - start of the interval.
+ * @param hi - end of the interval (`hi >= lo`).
+ * @param out - receives the roots (appended).
+ * @returns the number of roots appended.
+ * @example
+ * ```ts
+ * const roots: number[] = [];
+ * polynomialRootsIn(new Float64Array([-2, 0, 1]), 0, 2, 0, 5, roots); // roots = [1.4142135623730951]
+ * ```
+ */
+export function polynomialRootsIn(coefficients: ArrayLike<number>, offset: number, degree: number, lo: number, hi: number, out: number[]): number {
+  let d = degree;
+  while (d > 0 && coefficients[offset + d] === 0) d--;
+  if (d === 0) return 0;
+  const start = out.length;
+  rootsRecursive(coefficients, offset, d, lo, hi, out, 0);
+  return out.length - start;
+}
+
+function pushRoot(out: number[], r: number, lo: number, hi: number): void {
+  const slack = 1e-12 * (Math.abs(hi - lo) + Math.abs(lo) + Math.abs(hi));
+  if (!(r >= lo - slack && r <= hi + slack)) return;
+  const x = r < lo ? lo : r > hi ? hi : r;
+  const last = out.length > 0 ? (out[out.length - 1] as number) : Number.NaN;
+  if (x === last) return;
+  out.push(x);
+}
+
+function rootsRecursive(c: ArrayLike<number>, off: number, d: number, lo: number, hi: number, out: number[], level: number): void {
+  while (d > 0 && c[off + d] === 0) d--;
+  if (d === 0) return;
+  if (d === 1) {
+    pushRoot(out, -(c[off] as number) / (c[off + 1] as number), lo, hi);
+    return;
+  }
+  if (d === 2) {
+    quadraticRoots(c[off] as number, c[off + 1] as number, c[off + 2] as number, lo, hi, out);
+    return;
+  }
+  // Derivative into scratch, then its roots (recursively) into scratch.
+  const dOff = level * (MAX_DEGREE + 1);
+  for (let k = 1; k <= d; k++) derivativeScratch[dOff + k - 1] = k * (c[off + k] as number);
+  const crit: number[] = [];
+  rootsRecursive(derivativeScratch, dOff, d - 1, lo, hi, crit, level + 1);
+  const rOff = level * (MAX_DEGREE + 2);
+  let n = 0;
+  rootScratch[rOff + n++] = lo;
+  for (const r of crit) if (r > lo && r < hi) rootScratch[rOff + n++] = r;
+  rootScratch[rOff + n++] = hi;
+  // Scale of the polynomial on the interval, for "touching zero" decisions.
+  let scale = 0;
+  const m = Math.max(Math.abs(lo), Math.abs(hi));
+  let p = 1;
+  for (let k = 0; k <= d; k++) {
+    scale += Math.abs(c[off + k] as number) * p;
+    p *= m;
+  }
+  const touch = 64 * Number.EPSILON * scale;
+  let a = rootScratch[rOff] as number;
+  let fa = evaluatePolynomial(c, off, d, a);
+  if (fa === 0) pushRoot(out, a, lo, hi);
+  for (let i = 1; i < n; i++) {
+    const b = rootScratch[rOff + i] as number;
+    const fb = evaluatePolynomial(c, off, d, b);
+    if (fb === 0) {
+      pushRoot(out, b, lo, hi);
+    } else if (fa !== 0 && (fa < 0) !== (fb < 0)) {
+      pushRoot(out, bracketedRoot(c, off, d, a, b, fa, fb), lo, hi);
+    } else if (i < n - 1 && Math.abs(fb) <= touch) {
+      // a critical point where the polynomial touches zero without crossing
+      pushRoot(out, b, lo, hi);
+    }
+    a = b;
+    fa = fb;
+  }
+}
+
+function quadraticRoots(c0: number, c1: number, c2: number, lo: number, hi: number, out: number[]): void {
+  const disc = c1 * c1 - 4 * c2 * c0;
+  if (disc < 0) {
+    // a double root lost to rounding: keep it when the vertex value is zero to rounding
+    const v = -c1 / (2 * c2);
+    const fv = c0 + v * (c1 + v * c2);
+    if (Math.abs(fv) <= 64 * Number.EPSILON * (Math.abs(c0) + Math.abs(c1 * v) + Math.abs(c2 * v * v))) pushRoot(out, v, lo, hi);
+    return;
+  }
+  const q = -0.5 * (c1 + (c1 >= 0 ? Math.sqrt(disc) : -Math.sqrt(disc)));
+  let r1 = q / c2;
+  let r2 = q !== 0 ? c0 / q : r1;
+  if (r1 > r2) {
+    const t = r1;
+    r1 = r2;
+    r2 = t;
+  }
+  pushRoot(out, r1, lo, hi);
+  if (r2 !== r1) pushRoot(out, r2, lo, hi);
+}
+
+/** Root of a polynomial in (a, b) where it changes sign; Illinois false position with bisection safeguard. */
+function bracketedRoot(c: ArrayLike<number>, off: number, d: number, a: number, b: number, fa: number, fb: number): number {
+  let side = 0;
+  for (let iter = 0; iter < 200; iter++) {
+    const width = b - a;
+    if (width <= 4 * Number.EPSILON * Math.max(Math.abs(a), Math.abs(b)) || width <= Number.MIN_VALUE * 4) break;
+    let x = (a * fb - b * fa) / (fb - fa);
+    // every fourth step bisects, which bounds the work even on awkward shapes
+    if (!(x > a && x < b) || (iter & 3) === 3) x = 0.5 * (a + b);
+    const fx = evaluatePolynomial(c, off, d, x);
+    if (fx === 0) return x;
+    if ((fx < 0) === (fa < 0)) {
+      a = x;
+      fa = fx;
+      if (side === -1) fb *= 0.5;
+      side = -1;
+    } else {
+      b = x;
+      fb = fx;
+      if (side === 1) fa *= 0.5;
+      side = 1;
+    }
+  }
+  return Math.abs(fa) < Math.abs(fb) ? a : b;
+}

@@ -1,0 +1,107 @@
+import { IssueCollector, attempt, requireFinite, type Result } from "../errors/index.js";
+import { addMoments, addMomentsAbove, chordAt, M_AREA, M_Y } from "./integrals.js";
+import { prepareSection } from "./prepare.js";
+import type { SectionPropertiesOptions } from "./propertyTypes.js";
+import type { Section } from "./types.js";
+import { partWeights } from "./weights.js";
+
+/**
+ * The first moment of area above a horizontal cut and the width of the section at the cut:
+ * what the shear stress tau = V Q / (I b) needs.
+ *
+ * @example
+ * ```ts
+ * const { firstMoment, width } = firstMomentAbove(rectangle({ width: 100, depth: 200 }), 0);
+ * ```
+ */
+export interface FirstMomentAbove {
+  /**
+   * Q = integral of (y - y_c) dA over the part of the section above the cut, about the
+   * centroidal z axis (length^3); transformed (each part's area times n_i) for multi-material
+   * sections. Never negative: the area above any cut has its centroid above the section's.
+   */
+  readonly firstMoment: number;
+  /**
+   * Actual (not transformed) width of material on the cut line, holes taken away (length).
+   * Where the width jumps at the cut (a flange meeting a web), the smaller of `widthAbove` and
+   * `widthBelow`, which gives the larger shear stress.
+   */
+  readonly width: number;
+  /** Width just above the cut (the limit from above). */
+  readonly widthAbove: number;
+  /** Width just below the cut (the limit from below). */
+  readonly widthBelow: number;
+  /** Area above the cut (transformed for multi-material sections; length^2). */
+  readonly areaAbove: number;
+}
+
+const above = new Float64Array(6);
+const whole = new Float64Array(6);
+
+/**
+ * First moment Q of the area above the horizontal line y = `yCut` about the centroidal z axis,
+ * and the section's width on that line, for the shear stress tau = V Q / (I_z b) (Gere and
+ * Goodno, Mechanics of Materials, the shear formula in the chapter on stresses in beams).
+ * For a multi-material section Q is transformed (as is I_z from {@link sectionProperties}) and
+ * the width is the actual width, so V Q / (I_z b) is the actual shear stress.
+ *
+ * @param section - The section.
+ * @param yCut - Absolute y of the cut (length); outside the section Q and the width are 0.
+ * @param options - Optional {@link SectionPropertiesOptions} (the reference modulus).
+ * @throws FlexuraError any code of `section()`; `not-a-number` / `not-finite` for `yCut`;
+ *   `reference-modulus-not-positive`.
+ * @example
+ * ```ts
+ * const r = firstMomentAbove(rectangle({ width: 100, depth: 200 }), 0); // at the neutral axis
+ * r.firstMoment; // 100 * 100 * 50 = 500e3
+ * r.width; // 100
+ * ```
+ */
+export function firstMomentAbove(section: Section, yCut: number, options?: SectionPropertiesOptions): FirstMomentAbove {
+  const p = prepareSection(section);
+  const found = new IssueCollector();
+  requireFinite(found, yCut, ["yCut"], "height of the cut");
+  found.throwIfAny();
+  const { weights } = partWeights(p, options?.referenceModulus);
+  const cut = yCut - p.refY;
+  above.fill(0);
+  whole.fill(0);
+  let widthAbove = 0;
+  let widthBelow = 0;
+  for (let i = 0; i < p.count; i++) {
+    const from = p.edgeStart[i]!;
+    const to = p.edgeStart[i + 1]!;
+    const w = weights[i]!;
+    addMoments(whole, p.edges, from, to, w);
+    const yMin = p.partBox[i * 4 + 2]!;
+    const yMax = p.partBox[i * 4 + 3]!;
+    if (cut < yMin) {
+      addMoments(above, p.edges, from, to, w);
+      continue;
+    }
+    if (cut > yMax) continue;
+    const s = p.sign[i]!;
+    widthAbove += s * chordAt(p.edges, from, to, cut, true);
+    widthBelow += s * chordAt(p.edges, from, to, cut, false);
+    if (cut < yMax) addMomentsAbove(above, p.edges, from, to, w, cut);
+  }
+  const yc = whole[M_Y]! / whole[M_AREA]!;
+  const areaAbove = above[M_AREA]!;
+  const firstMoment = above[M_Y]! - areaAbove * yc;
+  const clean = (x: number): number => (Math.abs(x) < 1e-12 * (p.box[1]! - p.box[0]!) ? 0 : x);
+  const wa = clean(widthAbove);
+  const wb = clean(widthBelow);
+  return { firstMoment, width: Math.min(wa, wb), widthAbove: wa, widthBelow: wb, areaAbove };
+}
+
+/**
+ * The non-throwing form of {@link firstMomentAbove}.
+ *
+ * @example
+ * ```ts
+ * const r = tryFirstMomentAbove(rectangle({ width: 100, depth: 200 }), Number.NaN); // ok: false, "not-finite"
+ * ```
+ */
+export function tryFirstMomentAbove(section: Section, yCut: number, options?: SectionPropertiesOptions): Result<FirstMomentAbove> {
+  return attempt(() => firstMomentAbove(section, yCut, options));
+}

@@ -1,0 +1,28 @@
+export type { SectionPoint, Material, PolygonPart, CirclePart, SectorPart, FilletPart, SectionPart, Section, BoundingBox } from "./types.js";
+export { section, trySection } from "./construct.js";
+export type {
+  SectionPropertiesOptions,
+  SectionProperties,
+  PrincipalAxes,
+  ExtremeFibres,
+  SectionModuli,
+  PartProperties,
+  TransformedInfo,
+  RadiiOfGyration,
+} from "./propertyTypes.js";
+export { sectionProperties, trySectionProperties } from "./properties.js";
+export type { FirstMomentAbove } from "./firstMoment.js";
+export { firstMomentAbove, tryFirstMomentAbove } from "./firstMoment.js";
+export type { ShapeOptions } from "./shapes/dimensions.js";
+export type { RectangleDimensions } from "./shapes/rectangle.js";
+export { rectangle } from "./shapes/rectangle.js";
+export type { CircleDimensions, PipeDimensions } from "./shapes/circular.js";
+export { circle, pipe } from "./shapes/circular.js";
+export type { ISectionDimensions } from "./shapes/iSection.js";
+export { iSection } from "./shapes/iSection.js";
+export type { TeeDimensions } from "./shapes/tee.js";
+export { tee } from "./shapes/tee.js";
+export type { MirrorAxis } from "./transform.js";
+export { translatePart, rotatePart, mirrorPart, translateSection, rotateSection, mirrorSection } from "./transform.js";
+export type { SecondMomentsAbout } from "./about.js";
+export { secondMomentAbout, trySecondMomentAbout } from "./about.js";

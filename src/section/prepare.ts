@@ -1,0 +1,249 @@
+// Validation and compilation of a whole section into flat edge arrays, relative to the centre
+// of its bounding box (so that sections far from the origin keep their precision).
+import { IssueCollector, describeValue } from "../errors/index.js";
+import { boundarySamples, containsPoint } from "./contain.js";
+import { ARC, STRIDE, pushPartBoundary } from "./edges.js";
+import { sinExact, cosExact } from "./angles.js";
+import { validatePart } from "./validatePart.js";
+import type { Section, SectionPart } from "./types.js";
+
+/** A checked section in the compiled form the property functions integrate over. */
+export interface PreparedSection {
+  /** The section it was made from. */
+  readonly section: Section;
+  /** Number of parts. */
+  readonly count: number;
+  /** Edges (see edges.ts), coordinates relative to (refZ, refY). */
+  readonly edges: Float64Array;
+  /** Part i owns edges [edgeStart[i], edgeStart[i + 1]). */
+  readonly edgeStart: Int32Array;
+  /** +1 for a solid part, -1 for a hole. */
+  readonly sign: Float64Array;
+  /** Elastic modulus of each part (a hole takes its host's unless it has its own); NaN when none. */
+  readonly modulus: Float64Array;
+  /** Yield strength of each part (as for modulus); NaN when none. */
+  readonly yieldStrength: Float64Array;
+  /** Bounding box of each part, relative: zMin, zMax, yMin, yMax (stride 4). */
+  readonly partBox: Float64Array;
+  /** Bounding box of the solid parts, relative: zMin, zMax, yMin, yMax. */
+  readonly box: Float64Array;
+  /** Absolute z of the local origin. */
+  readonly refZ: number;
+  /** Absolute y of the local origin. */
+  readonly refY: number;
+  /** True when the parts carry materials. */
+  readonly hasMaterial: boolean;
+  /** Geometric (untransformed) net area. */
+  readonly netArea: number;
+}
+
+const cache = new WeakMap<Section, PreparedSection>();
+
+function edgeBox(edges: number[], from: number, to: number, box: Float64Array, at: number): void {
+  let zMin = Infinity, zMax = -Infinity, yMin = Infinity, yMax = -Infinity;
+  for (let e = from; e < to; e++) {
+    const o = e * STRIDE;
+    let za: number, ya: number, zb: number, yb: number;
+    if (edges[o] === ARC) {
+      const zc = edges[o + 1]!, yc = edges[o + 2]!, r = edges[o + 3]!;
+      za = zc + r * cosExact(edges[o + 4]!);
+      ya = yc + r * sinExact(edges[o + 4]!);
+      zb = zc + r * cosExact(edges[o + 5]!);
+      yb = yc + r * sinExact(edges[o + 5]!);
+    } else {
+      za = edges[o + 1]!;
+      ya = edges[o + 2]!;
+      zb = edges[o + 3]!;
+      yb = edges[o + 4]!;
+    }
+    zMin = Math.min(zMin, za, zb);
+    zMax = Math.max(zMax, za, zb);
+    yMin = Math.min(yMin, ya, yb);
+    yMax = Math.max(yMax, ya, yb);
+  }
+  box[at] = zMin;
+  box[at + 1] = zMax;
+  box[at + 2] = yMin;
+  box[at + 3] = yMax;
+}
+
+function compile(section: Section, found: IssueCollector): PreparedSection | undefined {
+  const parts = section.parts;
+  const count = parts.length;
+  const list: number[] = [];
+  const edgeStart = new Int32Array(count + 1);
+  for (let i = 0; i < count; i++) {
+    edgeStart[i] = list.length / STRIDE;
+    pushPartBoundary(list, parts[i] as SectionPart);
+  }
+  edgeStart[count] = list.length / STRIDE;
+  const partBox = new Float64Array(count * 4);
+  const sign = new Float64Array(count);
+  const box = new Float64Array([Infinity, -Infinity, Infinity, -Infinity]);
+  for (let i = 0; i < count; i++) {
+    edgeBox(list, edgeStart[i]!, edgeStart[i + 1]!, partBox, i * 4);
+    const hole = parts[i]?.hole === true;
+    sign[i] = hole ? -1 : 1;
+    if (hole) continue;
+    box[0] = Math.min(box[0]!, partBox[i * 4]!);
+    box[1] = Math.max(box[1]!, partBox[i * 4 + 1]!);
+    box[2] = Math.min(box[2]!, partBox[i * 4 + 2]!);
+    box[3] = Math.max(box[3]!, partBox[i * 4 + 3]!);
+  }
+  if (!(box[0]! < box[1]!)) {
+    found.add("section-no-solid", ["parts"], "The section has no solid part (every part is a hole); add the solid parts the holes are cut from.");
+    return undefined;
+  }
+  const refZ = (box[0]! + box[1]!) / 2;
+  const refY = (box[2]! + box[3]!) / 2;
+  for (let e = 0; e < list.length; e += STRIDE) {
+    list[e + 1]! -= refZ;
+    list[e + 2]! -= refY;
+    if (list[e] !== ARC) {
+      list[e + 3]! -= refZ;
+      list[e + 4]! -= refY;
+    }
+  }
+  for (let i = 0; i < count; i++) {
+    partBox[i * 4]! -= refZ;
+    partBox[i * 4 + 1]! -= refZ;
+    partBox[i * 4 + 2]! -= refY;
+    partBox[i * 4 + 3]! -= refY;
+  }
+  box[0]! -= refZ;
+  box[1]! -= refZ;
+  box[2]! -= refY;
+  box[3]! -= refY;
+  const edges = Float64Array.from(list);
+  const tolerance = 1e-9 * Math.max(box[1]! - box[0]!, box[3]! - box[2]!);
+
+  // materials: all solid parts have one, or none does
+  const modulus = new Float64Array(count).fill(Number.NaN);
+  const yieldStrength = new Float64Array(count).fill(Number.NaN);
+  let withMaterial = 0;
+  let solids = 0;
+  for (let i = 0; i < count; i++) {
+    const m = parts[i]?.material;
+    if (m) {
+      modulus[i] = m.elasticModulus;
+      yieldStrength[i] = m.yieldStrength ?? Number.NaN;
+    }
+    if (sign[i] === 1) {
+      solids++;
+      if (m) withMaterial++;
+    }
+  }
+  const hasMaterial = withMaterial > 0;
+  if (hasMaterial && withMaterial < solids) {
+    for (let i = 0; i < count; i++) {
+      if (sign[i] === 1 && !parts[i]?.material) {
+        found.add("material-missing", ["parts", i, "material"], "Some parts have a material and this one does not; give every solid part a material, or none.");
+      }
+    }
+  }
+
+  // holes inside solids; a hole without a material takes its host's
+  for (let i = 0; i < count; i++) {
+    if (sign[i] === 1) continue;
+    const samples = boundarySamples(edges, edgeStart[i]!, edgeStart[i + 1]!);
+    const hits = new Int32Array(count);
+    let outside = -1;
+    for (let s = 0; s < samples.length; s += 2) {
+      const z = samples[s]!;
+      const y = samples[s + 1]!;
+      let inAny = false;
+      for (let j = 0; j < count; j++) {
+        if (sign[j] !== 1) continue;
+        if (z < partBox[j * 4]! - tolerance || z > partBox[j * 4 + 1]! + tolerance) continue;
+        if (y < partBox[j * 4 + 2]! - tolerance || y > partBox[j * 4 + 3]! + tolerance) continue;
+        if (containsPoint(edges, edgeStart[j]!, edgeStart[j + 1]!, z, y, tolerance)) {
+          hits[j]!++;
+          inAny = true;
+        }
+      }
+      if (!inAny && outside < 0) outside = s;
+    }
+    if (outside >= 0) {
+      const at = { y: samples[outside + 1]! + refY, z: samples[outside]! + refZ };
+      found.add(
+        "hole-outside-solid",
+        ["parts", i],
+        `This hole reaches outside every solid part (for example at y = ${describeValue(at.y)}, z = ${describeValue(at.z)}); a hole must lie within the solid parts it is cut from.`,
+        { at },
+      );
+      continue;
+    }
+    let host = -1;
+    for (let j = 0; j < count; j++) if (host < 0 || hits[j]! > hits[host]!) host = j;
+    if (Number.isNaN(modulus[i]!)) {
+      modulus[i] = modulus[host]!;
+      yieldStrength[i] = yieldStrength[host]!;
+    }
+  }
+
+  let netArea = 0;
+  for (let i = 0; i < count; i++) {
+    const from = edgeStart[i]!;
+    const to = edgeStart[i + 1]!;
+    netArea += sign[i]! * regionArea(edges, from, to);
+  }
+  if (found.empty && !(netArea > 1e-12 * (box[1]! - box[0]!) * (box[3]! - box[2]!))) {
+    found.add("section-area-not-positive", ["parts"], `The holes take away all of the solid area (net area ${netArea}); holes must not overlap one another or cover the solids.`, { area: netArea });
+  }
+  if (!found.empty) return undefined;
+  return { section, count, edges, edgeStart, sign, modulus, yieldStrength, partBox, box, refZ, refY, hasMaterial, netArea };
+}
+
+function regionArea(edges: Float64Array, from: number, to: number): number {
+  let a = 0;
+  for (let e = from; e < to; e++) {
+    const o = e * STRIDE;
+    if (edges[o] === ARC) {
+      const zc = edges[o + 1]!, r = edges[o + 3]!, t0 = edges[o + 4]!, t1 = edges[o + 5]!;
+      // \int (zc + r cos t) r cos t dt
+      a += zc * r * (Math.sin(t1) - Math.sin(t0)) + r * r * ((t1 - t0) / 2 + (Math.sin(2 * t1) - Math.sin(2 * t0)) / 4);
+    } else {
+      a += ((edges[o + 4]! - edges[o + 2]!) * (edges[o + 1]! + edges[o + 3]!)) / 2;
+    }
+  }
+  return a;
+}
+
+/** Records every problem with the section; returns the compiled form when there is none. */
+export function checkSection(section: unknown, found: IssueCollector): PreparedSection | undefined {
+  if (typeof section !== "object" || section === null || !Array.isArray((section as { parts?: unknown }).parts)) {
+    found.add("section-invalid", [], `A section must be an object { parts: [...] }; got ${describeValue(section)}.`);
+    return undefined;
+  }
+  const parts = (section as Section).parts;
+  if (parts.length === 0) {
+    found.add("section-empty", ["parts"], "The section has no parts; give at least one solid part.");
+    return undefined;
+  }
+  let ok = true;
+  parts.forEach((p, i) => {
+    if (!validatePart(found, p, ["parts", i])) ok = false;
+  });
+  if (!ok) return undefined;
+  return compile(section as Section, found);
+}
+
+/**
+ * The compiled form of a section: from the cache for sections built by flexura's own
+ * functions (which are frozen), otherwise checked and compiled now.
+ *
+ * @throws FlexuraError with every problem found in the section.
+ */
+export function prepareSection(section: Section): PreparedSection {
+  const hit = cache.get(section);
+  if (hit) return hit;
+  const found = new IssueCollector();
+  const prepared = checkSection(section, found);
+  found.throwIfAny();
+  return prepared as PreparedSection;
+}
+
+/** Remembers the compiled form of a frozen section built by flexura. */
+export function remember(prepared: PreparedSection): void {
+  cache.set(prepared.section, prepared);
+}

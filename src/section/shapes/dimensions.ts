@@ -1,0 +1,63 @@
+// Shared checks and builders for the parametric shapes.
+import { IssueCollector, describeValue, requireFinite } from "../../errors/index.js";
+import type { Material, PolygonPart, SectionPart, SectionPoint } from "../types.js";
+
+/** Options common to every shape function. */
+export interface ShapeOptions {
+  /** Material given to every part of the shape (omit for a section of one unnamed material). */
+  readonly material?: Material;
+}
+
+/**
+ * Checks that each named field of `dims` is a finite number > 0 (required), absent or >= 0
+ * (`optional`), or absent or > 0 (`positiveIfGiven`). Returns the collector for further checks.
+ */
+export function checkDimensions(
+  dims: unknown,
+  required: readonly string[],
+  optional: readonly string[] = [],
+  positiveIfGiven: readonly string[] = [],
+): { found: IssueCollector; ok: boolean } {
+  const found = new IssueCollector();
+  if (typeof dims !== "object" || dims === null) {
+    found.add("dimensions-invalid", [], `The dimensions must be an object; got ${describeValue(dims)}.`);
+    return { found, ok: false };
+  }
+  const d = dims as Record<string, unknown>;
+  let ok = true;
+  for (const name of [...required, ...positiveIfGiven]) {
+    const v = d[name];
+    if (v === undefined && !required.includes(name)) continue;
+    if (!requireFinite(found, v, [name], name)) ok = false;
+    else if (!(v > 0)) {
+      found.add("dimension-not-positive", [name], `${name} must be greater than zero; got ${v}.`, { value: v });
+      ok = false;
+    }
+  }
+  for (const name of optional) {
+    const v = d[name];
+    if (v === undefined) continue;
+    if (!requireFinite(found, v, [name], name)) ok = false;
+    else if (v < 0) {
+      found.add("dimension-negative", [name], `${name} must not be negative; got ${v}.`, { value: v });
+      ok = false;
+    }
+  }
+  return { found, ok };
+}
+
+/** An axis-aligned rectangle part between z0..z1 and y0..y1 (counterclockwise). */
+export function box(z0: number, z1: number, y0: number, y1: number, material: Material | undefined, hole = false): PolygonPart {
+  const points: SectionPoint[] = [
+    { y: y0, z: z0 },
+    { y: y0, z: z1 },
+    { y: y1, z: z1 },
+    { y: y1, z: z0 },
+  ];
+  return withExtras({ kind: "polygon", points }, material, hole);
+}
+
+/** Adds `material` and `hole` to a part when they are set. */
+export function withExtras<P extends SectionPart>(part: P, material: Material | undefined, hole = false): P {
+  return { ...part, ...(hole ? { hole: true } : {}), ...(material ? { material } : {}) };
+}

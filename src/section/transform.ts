@@ -1,0 +1,115 @@
+import { cosExact, sinExact } from "./angles.js";
+import { section } from "./construct.js";
+import type { Section, SectionPart, SectionPoint } from "./types.js";
+
+/** Which axis to mirror across: "y" (the vertical axis z = 0: left and right swap) or "z" (the horizontal axis y = 0: top and bottom swap). */
+export type MirrorAxis = "y" | "z";
+
+function mapPart(part: SectionPart, point: (p: SectionPoint) => SectionPoint, angle: (a: number) => number, fillet: (o: number) => number, sweepStart: (start: number, sweep: number) => number): SectionPart {
+  switch (part.kind) {
+    case "polygon":
+      return { ...part, points: part.points.map(point) };
+    case "circle":
+      return { ...part, centre: point(part.centre) };
+    case "sector":
+      return { ...part, centre: point(part.centre), startAngle: sweepStart(angle(part.startAngle), part.sweep) };
+    case "fillet":
+      return { ...part, corner: point(part.corner), orientation: fillet(part.orientation) };
+    default: {
+      const never: never = part;
+      return never;
+    }
+  }
+}
+
+/**
+ * The part moved by `by` (length): every point gains `by.y` and `by.z`.
+ *
+ * @example
+ * ```ts
+ * const moved = translatePart({ kind: "circle", centre: { y: 0, z: 0 }, radius: 5 }, { y: 100, z: 0 });
+ * ```
+ */
+export function translatePart(part: SectionPart, by: SectionPoint): SectionPart {
+  const point = (p: SectionPoint): SectionPoint => ({ y: p.y + by.y, z: p.z + by.z });
+  const same = (a: number): number => a;
+  return mapPart(part, point, same, same, same);
+}
+
+/**
+ * The part rotated by `angle` radians counterclockwise (from +z towards +y) about `about`
+ * (default the origin). Quarter turns are exact.
+ *
+ * @example
+ * ```ts
+ * const upright = rotatePart(plate, Math.PI / 2);
+ * ```
+ */
+export function rotatePart(part: SectionPart, angle: number, about: SectionPoint = { y: 0, z: 0 }): SectionPart {
+  const c = cosExact(angle);
+  const s = sinExact(angle);
+  const point = (p: SectionPoint): SectionPoint => {
+    const dz = p.z - about.z;
+    const dy = p.y - about.y;
+    return { y: about.y + dz * s + dy * c, z: about.z + dz * c - dy * s };
+  };
+  const turn = (a: number): number => a + angle;
+  return mapPart(part, point, turn, turn, (start) => start);
+}
+
+/**
+ * The part mirrored across an axis through the origin: `"y"` maps z to -z (left and right
+ * swap), `"z"` maps y to -y (turns it upside down). Combine with {@link translatePart} to
+ * mirror across another line.
+ *
+ * @example
+ * ```ts
+ * const otherSide = mirrorPart(fillet, "y");
+ * ```
+ */
+export function mirrorPart(part: SectionPart, axis: MirrorAxis): SectionPart {
+  if (axis === "y") {
+    // z -> -z: an angle t becomes pi - t; a sector's sweep runs the other way
+    return mapPart(part, (p) => ({ y: p.y, z: -p.z }), (a) => Math.PI - a, (o) => Math.PI / 2 - o, (start, sweep) => start - sweep);
+  }
+  return mapPart(part, (p) => ({ y: -p.y, z: p.z }), (a) => -a, (o) => -o - Math.PI / 2, (start, sweep) => start - sweep);
+}
+
+/**
+ * The section moved by `by` (length).
+ *
+ * @throws FlexuraError any code of `section()` when the input is not a valid section.
+ * @example
+ * ```ts
+ * const raised = translateSection(rectangle({ width: 100, depth: 20 }), { y: 160, z: 0 });
+ * ```
+ */
+export function translateSection(s: Section, by: SectionPoint): Section {
+  return section(s.parts.map((p) => translatePart(p, by)));
+}
+
+/**
+ * The section rotated by `angle` radians counterclockwise about `about` (default the origin).
+ *
+ * @throws FlexuraError any code of `section()` when the input is not a valid section.
+ * @example
+ * ```ts
+ * const onItsSide = rotateSection(iSection({ depth: 300, flangeWidth: 150, flangeThickness: 10, webThickness: 6 }), Math.PI / 2);
+ * ```
+ */
+export function rotateSection(s: Section, angle: number, about?: SectionPoint): Section {
+  return section(s.parts.map((p) => rotatePart(p, angle, about)));
+}
+
+/**
+ * The section mirrored across the y axis (`"y"`, left-right) or the z axis (`"z"`, upside down).
+ *
+ * @throws FlexuraError any code of `section()` when the input is not a valid section.
+ * @example
+ * ```ts
+ * const stemUp = mirrorSection(tee({ depth: 150, flangeWidth: 150, flangeThickness: 12, webThickness: 8 }), "z");
+ * ```
+ */
+export function mirrorSection(s: Section, axis: MirrorAxis): Section {
+  return section(s.parts.map((p) => mirrorPart(p, axis)));
+}

@@ -1,0 +1,45 @@
+// Modular ratios and signed weights of the parts of a prepared section.
+import { IssueCollector } from "../errors/index.js";
+import type { PreparedSection } from "./prepare.js";
+
+/** The transformed-section weights for one reference modulus. */
+export interface Weights {
+  /** Reference modulus, or null when no part has a material. */
+  readonly referenceModulus: number | null;
+  /** n_i = E_i / E_ref per part (1 when there are no materials). */
+  readonly ratios: Float64Array;
+  /** sign_i * n_i per part (holes negative). */
+  readonly weights: Float64Array;
+}
+
+/**
+ * Weights for a reference modulus (default: that of the first solid part with a material).
+ *
+ * @throws FlexuraError `reference-modulus-not-positive` (or `not-a-number` / `not-finite`).
+ */
+export function partWeights(p: PreparedSection, referenceModulus: number | undefined): Weights {
+  const ratios = new Float64Array(p.count);
+  const weights = new Float64Array(p.count);
+  let ref: number | null = null;
+  if (referenceModulus !== undefined) {
+    if (typeof referenceModulus !== "number" || !Number.isFinite(referenceModulus) || !(referenceModulus > 0)) {
+      const found = new IssueCollector();
+      found.add("reference-modulus-not-positive", ["referenceModulus"], `The reference modulus must be a finite number greater than zero; got ${String(referenceModulus)}.`, { value: String(referenceModulus) });
+      found.throwIfAny();
+    }
+    ref = referenceModulus;
+  } else if (p.hasMaterial) {
+    for (let i = 0; i < p.count; i++) {
+      if (p.sign[i] === 1) {
+        ref = p.modulus[i]!;
+        break;
+      }
+    }
+  }
+  for (let i = 0; i < p.count; i++) {
+    const n = p.hasMaterial && ref !== null ? p.modulus[i]! / ref : 1;
+    ratios[i] = n;
+    weights[i] = p.sign[i]! * n;
+  }
+  return { referenceModulus: ref, ratios, weights };
+}
