@@ -12,5 +12,4 @@ export * from "./loads/index.js";
 export * from "./supports/index.js";
 export * from "./beam/index.js";
 export * from "./section/index.js";
-export * from "./model/index.js";
 export * from "./stress/index.js";
