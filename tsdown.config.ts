@@ -3,6 +3,7 @@ import { defineConfig } from "tsdown";
 /** One build entry per public module; keep in step with the `exports` map in package.json. */
 export const entries = {
   index: "src/index.ts",
+  units: "src/units/index.ts",
   beam: "src/beam/entry.ts",
   section: "src/section/index.ts",
   model: "src/model/index.ts",

@@ -1,7 +1,9 @@
 // `npm run bench` runs this file: import every module's benchmarks, then run them.
 // `npm run bench -- <regex>` runs only the benchmarks whose names match.
+// package.json lists ./bench/** under "sideEffects", so the bundler that runs this file keeps these imports.
 import { runAll } from "./harness.js";
 import "./errors.bench.js";
+import "./units.bench.js";
 import "./math.bench.js";
 import "./beam.bench.js";
 import "./stress.bench.js";

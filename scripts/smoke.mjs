@@ -18,6 +18,8 @@ try {
     join(dir, "esm.mjs"),
     `import * as f from "flexura";
 if (typeof f.isFlexuraError !== "function") throw new Error("esm: isFlexuraError missing");
+import { convert } from "flexura/units";
+if (convert(1, "in", "mm") !== 25.4) throw new Error("esm: flexura/units convert wrong");
 console.log("smoke esm ok:", Object.keys(f).length, "exports");
 `,
   );
@@ -25,6 +27,7 @@ console.log("smoke esm ok:", Object.keys(f).length, "exports");
     join(dir, "cjs.cjs"),
     `const f = require("flexura");
 if (typeof f.isFlexuraError !== "function") throw new Error("cjs: isFlexuraError missing");
+if (require("flexura/units").convert(1, "ft", "in") !== 12) throw new Error("cjs: flexura/units convert wrong");
 console.log("smoke cjs ok");
 `,
   );
@@ -33,7 +36,9 @@ console.log("smoke cjs ok");
     `import { attempt, isFlexuraError, type Result } from "flexura";
 const r: Result<number> = attempt(() => 1);
 const ok: boolean = r.ok && !isFlexuraError(r.value);
-export { ok };
+import { parseQuantity, type Quantity } from "flexura/units";
+const q: Quantity = parseQuantity("12 kN", "force");
+export { ok, q };
 `,
   );
   writeFileSync(

@@ -7,6 +7,7 @@
  * @packageDocumentation
  */
 export * from "./errors/index.js";
+export * from "./units/index.js";
 export * from "./math/index.js";
 export * from "./loads/index.js";
 export * from "./supports/index.js";

@@ -58,17 +58,20 @@ export function extremesOf(pp: PiecewisePolynomial, lo?: number, hi?: number): E
     const x1 = b[i + 1] as number;
     if (x1 < from || x0 > to) continue;
     if (x1 === from && i + 1 < pieces && from !== to) continue;
-    const a = Math.max(x0, from) - x0;
-    const e = Math.min(x1, to) - x0;
+    // piece ends are reported at the exact breakpoint (x0 + (x1 - x0) need not equal x1)
+    const xa = Math.max(x0, from);
+    const xe = Math.min(x1, to);
+    const a = xa - x0;
+    const e = xe - x0;
     const o = i * stride;
     let v = evaluatePolynomial(c, o, d, a);
     if (v > maxV) {
       maxV = v;
-      maxX = a + x0;
+      maxX = xa;
     }
     if (v < minV) {
       minV = v;
-      minX = a + x0;
+      minX = xa;
     }
     if (e > a && d >= 2) {
       for (let k = 1; k <= d; k++) derivative[k - 1] = k * (c[o + k] as number);
@@ -78,22 +81,22 @@ export function extremesOf(pp: PiecewisePolynomial, lo?: number, hi?: number): E
         v = evaluatePolynomial(c, o, d, t);
         if (v > maxV) {
       maxV = v;
-      maxX = t + x0;
+      maxX = Math.min(t + x0, xe);
     }
         if (v < minV) {
       minV = v;
-      minX = t + x0;
+      minX = Math.min(t + x0, xe);
     }
       }
     }
     v = evaluatePolynomial(c, o, d, e);
     if (v > maxV) {
       maxV = v;
-      maxX = e + x0;
+      maxX = xe;
     }
     if (v < minV) {
       minV = v;
-      minX = e + x0;
+      minX = xe;
     }
   }
   return { max: { value: maxV, at: maxX }, min: { value: minV, at: minX } };
@@ -124,12 +127,14 @@ export function rootsOf(pp: PiecewisePolynomial, lo?: number, hi?: number): read
     const x0 = b[i] as number;
     const x1 = b[i + 1] as number;
     if (x1 < from || x0 > to) continue;
-    const a = Math.max(x0, from) - x0;
-    const e = Math.min(x1, to) - x0;
+    const xa = Math.max(x0, from);
+    const xe = Math.min(x1, to);
+    const a = xa - x0;
+    const e = xe - x0;
     local.length = 0;
     polynomialRootsIn(pp.coefficients, i * stride, d, a, e, local);
     for (const t of local) {
-      const x = t + x0;
+      const x = t === a ? xa : t === e ? xe : Math.min(t + x0, xe);
       const prev = out.length > 0 ? (out[out.length - 1] as number) : Number.NaN;
       if (!(Math.abs(x - prev) <= 1e-12 * (Math.abs(x) + (x1 - x0)))) out.push(x);
     }

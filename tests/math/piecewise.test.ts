@@ -129,6 +129,14 @@ describe("extremesOf and rootsOf", () => {
     expect(extremesOf(pp, 1.5, 2)).toEqual({ max: { value: 0.75, at: 1.5 }, min: { value: 0, at: 2 } });
   });
 
+  it("extremesOf reports a peak at a piece end at the exact breakpoint", () => {
+    // 1.4 + (6.2 - 1.4) is not 6.2 in float64: the location must still be the breakpoint itself
+    const pp = piecewisePolynomial([0, 1.4, 6.2, 10], [0, 0, 0, 0, 0, 0, 0, 0, 0, 0, 0, 3.9245856681478355e-13, 0, 0, 0, 0, 0, 0], 5);
+    const { max } = extremesOf(pp);
+    expect(max.at).toBe(6.2);
+    expect(evaluatePiecewise(pp, max.at, "left")).toBe(max.value);
+  });
+
   it("extremesOf counts both limits at a jump", () => {
     expect(extremesOf(step)).toEqual({ max: { value: 3, at: 1 }, min: { value: 1, at: 0 } });
   });

@@ -1,0 +1,15 @@
+export type { QuantityKind, Dimension } from "./kinds.js";
+export { quantityKinds, dimensionOfKind, isQuantityKind, fitsDimension, sameDimension, kindsOfDimension, describeDimension } from "./kinds.js";
+export type { CatalogUnit } from "./catalog.js";
+export { unitCatalog } from "./catalog.js";
+export { FACTOR_PRECISION } from "./decimal.js";
+export type { UnitFactor, UnitFactorOptions } from "./unit.js";
+export { unitFactor, tryUnitFactor } from "./unit.js";
+export type { Quantity, ParseQuantityOptions } from "./quantity.js";
+export { parseQuantity, tryParseQuantity, convertQuantity, tryConvertQuantity } from "./quantity.js";
+export type { ConvertOptions } from "./convert.js";
+export { convert, tryConvert, conversionFactor, tryConversionFactor } from "./convert.js";
+export type { UnitSystem, UnitSystemName, DisplayRole } from "./systems.js";
+export { unitSystems, kindOfRole } from "./systems.js";
+export type { FormatQuantityOptions } from "./format.js";
+export { formatQuantity, tryFormatQuantity } from "./format.js";
