@@ -7,6 +7,7 @@ import "./units.bench.js";
 import "./math.bench.js";
 import "./beam.bench.js";
 import "./stress.bench.js";
+import "./section.bench.js";
 import "./model.bench.js";
 
 const pattern = process.argv[2];

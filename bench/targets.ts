@@ -2,7 +2,7 @@
 // against each target (docs/performance.md quotes it). Medians from mitata (p50).
 import { bench, runAll } from "./harness.js";
 import { solveBeam, evaluatePiecewiseMany, type BeamInput, type Load, type Support } from "../src/beam/entry.js";
-import { section, sectionProperties, type SectionPart } from "../src/section/index.js";
+import { section, sectionProperties, plasticProperties, type SectionPart } from "../src/section/index.js";
 import { elementDeflectionAt, solveByDenseElements } from "./reference/dense-elements.js";
 
 // --- members -------------------------------------------------------------------------------
@@ -94,7 +94,7 @@ bench("target 3a: continuous member, 100 spans", () => solveBeam(c100).peaks);
 bench("target 3b: continuous member, 10,000 spans", () => solveBeam(c10k).peaks);
 bench("target 4: moment at 1,000,000 points", () => evaluatePiecewiseMany(solvedThree.moment, xs, out));
 bench("target 5a: ten-part section with two holes, elastic properties", () => sectionProperties(tenParts));
-// 5b waits for plasticProperties
+bench("target 5b: ten-part section with two holes, plastic modulus", () => plasticProperties(tenParts));
 const uniform: BeamInput = {
   length: 10,
   stiffness: EI,

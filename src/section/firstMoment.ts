@@ -1,5 +1,5 @@
 import { IssueCollector, attempt, requireFinite, type Result } from "../errors/index.js";
-import { addMoments, addMomentsAbove, chordAt, M_AREA, M_Y } from "./integrals.js";
+import { addMomentsAbove, chordAt, M_AREA, M_Y } from "./integrals.js";
 import { prepareSection } from "./prepare.js";
 import type { SectionPropertiesOptions } from "./propertyTypes.js";
 import type { Section } from "./types.js";
@@ -72,11 +72,13 @@ export function firstMomentAbove(section: Section, yCut: number, options?: Secti
     const from = p.edgeStart[i]!;
     const to = p.edgeStart[i + 1]!;
     const w = weights[i]!;
-    addMoments(whole, p.edges, from, to, w);
+    whole[M_AREA]! += w * p.partMoments[i * 6 + M_AREA]!;
+    whole[M_Y]! += w * p.partMoments[i * 6 + M_Y]!;
     const yMin = p.partBox[i * 4 + 2]!;
     const yMax = p.partBox[i * 4 + 3]!;
     if (cut < yMin) {
-      addMoments(above, p.edges, from, to, w);
+      above[M_AREA]! += w * p.partMoments[i * 6 + M_AREA]!;
+      above[M_Y]! += w * p.partMoments[i * 6 + M_Y]!;
       continue;
     }
     if (cut > yMax) continue;

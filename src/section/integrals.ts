@@ -81,11 +81,38 @@ function addArc(out: Float64Array, w: number, zc: number, yc: number, r: number,
 
 /** Adds `w` times the moments of the region bounded by edges [from, to) into `out` (six moments). */
 export function addMoments(out: Float64Array, edges: Float64Array, from: number, to: number, w: number): void {
-  for (let e = from; e < to; e++) {
-    const o = e * STRIDE;
-    if (edges[o] === ARC) addArc(out, w, edges[o + 1]!, edges[o + 2]!, edges[o + 3]!, edges[o + 4]!, edges[o + 5]!);
-    else addLine(out, w, edges[o + 1]!, edges[o + 2]!, edges[o + 3]!, edges[o + 4]!);
+  // straight edges accumulate in locals (the hot loop); arcs add straight into `out`
+  let a = 0, my = 0, mz = 0, myy = 0, mzz = 0, myz = 0;
+  for (let o = from * STRIDE, end = to * STRIDE; o < end; o += STRIDE) {
+    if (edges[o] === ARC) {
+      addArc(out, w, edges[o + 1]!, edges[o + 2]!, edges[o + 3]!, edges[o + 4]!, edges[o + 5]!);
+      continue;
+    }
+    const z0 = edges[o + 1]!;
+    const y0 = edges[o + 2]!;
+    const z1 = edges[o + 3]!;
+    const y1 = edges[o + 4]!;
+    const d = y1 - y0;
+    if (d === 0) continue;
+    const z00 = z0 * z0;
+    const z01 = z0 * z1;
+    const z11 = z1 * z1;
+    const y00 = y0 * y0;
+    const y01 = y0 * y1;
+    const y11 = y1 * y1;
+    a += d * (z0 + z1);
+    my += d * (2 * z0 * y0 + z0 * y1 + z1 * y0 + 2 * z1 * y1);
+    mz += d * (z00 + z01 + z11);
+    myy += d * (z0 * (3 * y00 + 2 * y01 + y11) + z1 * (y00 + 2 * y01 + 3 * y11));
+    mzz += d * (z0 + z1) * (z00 + z11);
+    myz += d * (y0 * (3 * z00 + 2 * z01 + z11) + y1 * (z00 + 2 * z01 + 3 * z11));
   }
+  out[M_AREA]! += (w * a) / 2;
+  out[M_Y]! += (w * my) / 6;
+  out[M_Z]! += (w * mz) / 6;
+  out[M_YY]! += (w * myy) / 12;
+  out[M_ZZ]! += (w * mzz) / 12;
+  out[M_YZ]! += (w * myz) / 24;
 }
 
 /**

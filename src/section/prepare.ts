@@ -4,6 +4,7 @@ import { IssueCollector, describeValue } from "../errors/index.js";
 import { boundarySamples, containsPoint } from "./contain.js";
 import { ARC, STRIDE, pushPartBoundary } from "./edges.js";
 import { sinExact, cosExact } from "./angles.js";
+import { addMoments } from "./integrals.js";
 import { validatePart } from "./validatePart.js";
 import type { Section, SectionPart } from "./types.js";
 
@@ -35,6 +36,8 @@ export interface PreparedSection {
   readonly hasMaterial: boolean;
   /** Geometric (untransformed) net area. */
   readonly netArea: number;
+  /** Each part's own moments (area, \int y, \int z, \int y^2, \int z^2, \int y z; relative coordinates, unsigned), stride 6. */
+  readonly partMoments: Float64Array;
 }
 
 const cache = new WeakMap<Section, PreparedSection>();
@@ -181,32 +184,21 @@ function compile(section: Section, found: IssueCollector): PreparedSection | und
     }
   }
 
+  // each part's own moments, integrated once: they do not depend on the reference modulus
+  const partMoments = new Float64Array(count * 6);
+  const one = new Float64Array(6);
   let netArea = 0;
   for (let i = 0; i < count; i++) {
-    const from = edgeStart[i]!;
-    const to = edgeStart[i + 1]!;
-    netArea += sign[i]! * regionArea(edges, from, to);
+    one.fill(0);
+    addMoments(one, edges, edgeStart[i]!, edgeStart[i + 1]!, 1);
+    partMoments.set(one, i * 6);
+    netArea += sign[i]! * one[0]!;
   }
   if (found.empty && !(netArea > 1e-12 * (box[1]! - box[0]!) * (box[3]! - box[2]!))) {
     found.add("section-area-not-positive", ["parts"], `The holes take away all of the solid area (net area ${netArea}); holes must not overlap one another or cover the solids.`, { area: netArea });
   }
   if (!found.empty) return undefined;
-  return { section, count, edges, edgeStart, sign, modulus, yieldStrength, partBox, box, refZ, refY, hasMaterial, netArea };
-}
-
-function regionArea(edges: Float64Array, from: number, to: number): number {
-  let a = 0;
-  for (let e = from; e < to; e++) {
-    const o = e * STRIDE;
-    if (edges[o] === ARC) {
-      const zc = edges[o + 1]!, r = edges[o + 3]!, t0 = edges[o + 4]!, t1 = edges[o + 5]!;
-      // \int (zc + r cos t) r cos t dt
-      a += zc * r * (Math.sin(t1) - Math.sin(t0)) + r * r * ((t1 - t0) / 2 + (Math.sin(2 * t1) - Math.sin(2 * t0)) / 4);
-    } else {
-      a += ((edges[o + 4]! - edges[o + 2]!) * (edges[o + 1]! + edges[o + 3]!)) / 2;
-    }
-  }
-  return a;
+  return { section, count, edges, edgeStart, sign, modulus, yieldStrength, partBox, box, refZ, refY, hasMaterial, netArea, partMoments };
 }
 
 /** Records every problem with the section; returns the compiled form when there is none. */

@@ -1,5 +1,5 @@
 import { attempt, type Result } from "../errors/index.js";
-import { addMoments, M_AREA, M_Y, M_YY, M_YZ, M_Z, M_ZZ } from "./integrals.js";
+import { M_AREA, M_Y, M_YY, M_YZ, M_Z, M_ZZ } from "./integrals.js";
 import { prepareSection } from "./prepare.js";
 import { principalAxes } from "./principal.js";
 import type { SectionPropertiesOptions, SectionProperties, PartProperties } from "./propertyTypes.js";
@@ -7,7 +7,6 @@ import type { Section } from "./types.js";
 import { partWeights } from "./weights.js";
 
 const total = new Float64Array(6);
-const one = new Float64Array(6);
 
 /**
  * Elastic properties of a section about its centroid: area, centroid, second moments, product
@@ -36,12 +35,11 @@ export function sectionProperties(section: Section, options?: SectionPropertiesO
   const { referenceModulus, ratios, weights } = partWeights(p, options?.referenceModulus);
   total.fill(0);
   const parts: PartProperties[] = [];
+  const m = p.partMoments;
   for (let i = 0; i < p.count; i++) {
-    one.fill(0);
-    addMoments(one, p.edges, p.edgeStart[i]!, p.edgeStart[i + 1]!, 1);
     const w = weights[i]!;
-    for (let k = 0; k < 6; k++) total[k]! += w * one[k]!;
-    parts.push({ area: one[M_AREA]!, modularRatio: ratios[i]!, hole: p.sign[i]! < 0, extremes: { top: p.partBox[i * 4 + 3]!, bottom: p.partBox[i * 4 + 2]!, left: p.partBox[i * 4]!, right: p.partBox[i * 4 + 1]! } });
+    for (let k = 0; k < 6; k++) total[k]! += w * m[i * 6 + k]!;
+    parts.push({ area: m[i * 6 + M_AREA]!, modularRatio: ratios[i]!, hole: p.sign[i]! < 0, extremes: { top: p.partBox[i * 4 + 3]!, bottom: p.partBox[i * 4 + 2]!, left: p.partBox[i * 4]!, right: p.partBox[i * 4 + 1]! } });
   }
   const area = total[M_AREA]!;
   const yc = total[M_Y]! / area;

@@ -1,0 +1,43 @@
+import { bench, suite } from "./harness.js";
+import {
+  builtUp,
+  firstMomentAbove,
+  iSection,
+  plasticProperties,
+  rectangle,
+  section,
+  sectionProperties,
+  translateSection,
+  type Section,
+  type SectionPart,
+  type SectionPoint,
+} from "../src/section/index.js";
+
+// An invented strengthened beam: a rolled-style I with root fillets (7 parts), a cover plate on
+// the top flange (1) and two bolt holes through cover plate and flange (2; in the cross-section a
+// vertical hole through the plates is a rectangle): ten parts, two of them holes.
+const beam = iSection({ depth: 406, flangeWidth: 178, flangeThickness: 12.8, webThickness: 7.8, rootRadius: 10.2 });
+const cover = translateSection(rectangle({ width: 220, depth: 15 }), { y: 203 + 7.5, z: 0 });
+const boltHole = (z: number): SectionPart => ({ ...translateSection(rectangle({ width: 22, depth: 27.8 }), { y: 204.1, z }).parts[0]!, hole: true });
+const tenParts: Section = builtUp([beam, cover, boltHole(-60), boltHole(60)]);
+// the same section as plain data (as read from a file): checked on every call
+const tenPartsPlain: Section = JSON.parse(JSON.stringify(tenParts)) as Section;
+
+// An invented 1,000-corner outline (a wavy disc)
+const wavy: SectionPoint[] = Array.from({ length: 1000 }, (_, i) => {
+  const t = (2 * Math.PI * i) / 1000;
+  const r = 100 + 8 * Math.sin(12 * t);
+  return { y: r * Math.sin(t), z: r * Math.cos(t) };
+});
+const wavySection = section([{ kind: "polygon", points: wavy }]);
+const wavyPlain: Section = { parts: [{ kind: "polygon", points: wavy }] };
+
+suite("section", () => {
+  bench("section: sectionProperties (10 parts, 2 holes)", () => sectionProperties(tenParts));
+  bench("section: sectionProperties (10 parts, plain data: checks included)", () => sectionProperties(tenPartsPlain));
+  bench("section: firstMomentAbove (10 parts, one cut)", () => firstMomentAbove(tenParts, 150));
+  bench("section: plasticProperties (10 parts, 2 holes)", () => plasticProperties(tenParts));
+  bench("section: sectionProperties (1,000-vertex polygon)", () => sectionProperties(wavySection));
+  bench("section: sectionProperties (1,000-vertex polygon, plain data)", () => sectionProperties(wavyPlain));
+  bench("section: section() builds and checks the 10-part section", () => builtUp([beam, cover, boltHole(-60), boltHole(60)]));
+});
