@@ -7,17 +7,20 @@ export const entries = {
   beam: "src/beam/entry.ts",
   section: "src/section/index.ts",
   model: "src/model/index.ts",
+  report: "src/report/index.ts",
   stress: "src/stress/index.ts",
 } as const;
 
-export default defineConfig({
-  entry: entries,
-  format: ["esm", "cjs"],
-  dts: true,
-  sourcemap: false,
-  clean: true,
-  platform: "neutral",
-  target: "es2022",
-  outDir: "dist",
-  external: ["decimal.js"],
-});
+export default defineConfig([
+  {
+    entry: entries,
+    format: ["esm", "cjs"],
+    dts: true,
+    sourcemap: false,
+    clean: true,
+    platform: "neutral",
+    target: "es2022",
+    outDir: "dist",
+    external: ["decimal.js"],
+  },
+]);

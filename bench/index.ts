@@ -3,6 +3,7 @@
 // package.json lists ./bench/** under "sideEffects", so the bundler that runs this file keeps these imports.
 import { runAll } from "./harness.js";
 import "./errors.bench.js";
+import "./report.bench.js";
 import "./units.bench.js";
 import "./math.bench.js";
 import "./beam.bench.js";

@@ -1,0 +1,131 @@
+import type { ModelAnalysis, ModelDiagram, ModelPeaks } from "../model/index.js";
+import { formatReportQuantity } from "./format.js";
+import { lineDiagramSvg } from "./line-diagram.js";
+import type { DrawnLoad, MemberDrawing } from "./member-drawing.js";
+import { memberSvg } from "./member-svg.js";
+import { diagramValueAt, sampleDiagram } from "./sample.js";
+import { sectionSvg, type DrawnSectionPart, type SectionDrawing } from "./section-svg.js";
+
+/** Which picture a {@link ReportDiagram} is. */
+export type ReportDiagramName = "member" | "shear" | "moment" | "deflection" | "section";
+
+/** One SVG drawing of a report, with a name that suits a file name (`moment.svg`). */
+export interface ReportDiagram {
+  /** Short name, also the suggested file name without `.svg`. */
+  readonly name: ReportDiagramName;
+  /** The drawing's title. */
+  readonly title: string;
+  /** The SVG document. */
+  readonly svg: string;
+}
+
+/** What to add to the drawings of {@link reportDiagrams}. */
+export interface ReportDiagramsOptions {
+  /**
+   * Outlines of the cross-section, `[z, y]` points in the model's section-length unit; when
+   * given with a section result, a section drawing with the bending-stress profile is added.
+   */
+  readonly sectionOutline?: readonly DrawnSectionPart[];
+}
+
+/**
+ * Every diagram of an analysed model, as SVG strings: the member with its supports and loads to
+ * scale; shear, bending moment and deflection along the member with their peaks labelled; and,
+ * when `sectionOutline` is given and the model has a section, the cross-section with its
+ * centroid, neutral axis and bending-stress profile at the governing stress. Pure: no I/O.
+ *
+ * @param analysis - What `analyzeModel` returned.
+ * @param options - Extra drawings.
+ * @returns The drawings, in the order listed above.
+ * @example
+ * ```ts
+ * for (const d of reportDiagrams(analyzeModel(parseModel(json)))) console.log(d.name, d.svg.length);
+ * ```
+ */
+export function reportDiagrams(analysis: ModelAnalysis, options: ReportDiagramsOptions = {}): readonly ReportDiagram[] {
+  const u = analysis.units;
+  const model = analysis.model;
+  const name = model.name ?? "Member";
+  const out: ReportDiagram[] = [];
+  const member = memberDrawing(analysis, name);
+  out.push({ name: "member", title: member.title, svg: memberSvg(member) });
+  const line = (key: "shear" | "moment" | "deflection", title: string, diagram: ModelDiagram, peaks: ModelPeaks, colour: string): ReportDiagram => {
+    const full = `${name}: ${title}`;
+    const svg = lineDiagramSvg({
+      title: full,
+      length: model.length,
+      lengthUnit: u.length,
+      valueUnit: diagram.unit,
+      points: sampleDiagram(diagram),
+      peaks: [
+        { name: "max", ...peaks.max },
+        { name: "min", ...peaks.min },
+      ],
+      colour,
+    });
+    return { name: key, title: full, svg };
+  };
+  out.push(line("shear", "shear force", analysis.diagrams.shear, analysis.shear, "#1f4e8c"));
+  out.push(line("moment", "bending moment (positive = sagging)", analysis.diagrams.moment, analysis.moment, "#7a3e9d"));
+  out.push(line("deflection", "deflection (positive = upward)", analysis.diagrams.deflection, analysis.deflection, "#2e7d32"));
+  const section = sectionDrawing(analysis, name, options.sectionOutline);
+  if (section !== undefined) out.push({ name: "section", title: section.title, svg: sectionSvg(section) });
+  return out;
+}
+
+function memberDrawing(analysis: ModelAnalysis, name: string): MemberDrawing {
+  const model = analysis.model;
+  const u = analysis.units;
+  const loads: DrawnLoad[] = model.loads.map((l): DrawnLoad => {
+    switch (l.kind) {
+      case "point":
+        return { kind: "point", at: l.at, value: l.value };
+      case "couple":
+        return { kind: "moment", at: l.at, value: l.value };
+      case "distributed":
+        return { kind: "distributed", from: l.from, to: l.to, start: l.start, end: l.end };
+    }
+  });
+  return {
+    title: `${name}: supports and loads`,
+    length: model.length,
+    lengthUnit: u.length,
+    forceUnit: u.force,
+    momentUnit: u.moment,
+    distributedUnit: u.forcePerLength,
+    supports: model.supports.map((s) => ({ at: s.at, type: s.kind })),
+    hinges: model.hinges,
+    loads,
+  };
+}
+
+/**
+ * The section drawing's data: the profile is linear over the depth, sigma = -(M / I) y, with
+ * M / I taken from the governing extreme stress (the larger magnitude of tension and
+ * compression), so that it needs no unit conversion.
+ */
+function sectionDrawing(analysis: ModelAnalysis, name: string, outline: readonly DrawnSectionPart[] | undefined): SectionDrawing | undefined {
+  const s = analysis.section;
+  const st = analysis.stress;
+  if (outline === undefined || s === undefined || st === undefined) return undefined;
+  const u = analysis.units;
+  const governing = Math.abs(st.tension.value) >= Math.abs(st.compression.value) ? st.tension : st.compression;
+  const curvature = governing.y === 0 ? 0 : -governing.value / governing.y;
+  const bottom = -s.yBottom;
+  const top = s.yTop;
+  const left = diagramValueAt(analysis.diagrams.moment, governing.at, "left");
+  const right = diagramValueAt(analysis.diagrams.moment, governing.at, "right");
+  const moment = Math.abs(left) > Math.abs(right) ? left : right;
+  return {
+    title: `${name}: cross-section (${s.shape})`,
+    lengthUnit: u.sectionLength,
+    stressUnit: u.stress,
+    parts: outline,
+    centroid: s.centroid,
+    stress: [
+      [s.centroid.y + bottom, -curvature * bottom],
+      [s.centroid.y + top, -curvature * top],
+    ],
+    stressNote: `at x = ${formatReportQuantity(governing.at, u.length)}, M = ${formatReportQuantity(moment, u.moment)}`,
+  };
+}

@@ -1,0 +1,13 @@
+export { escapeXml } from "./escape.js";
+export { svgNumber, svgElement, svgText, svgPolyline, svgPolygon, svgDocument, type SvgAttributes } from "./svg.js";
+export { formatReportNumber, formatReportQuantity, textTable } from "./format.js";
+export { sampleDiagram, diagramValueAt, type SampleDiagramOptions } from "./sample.js";
+export { lineDiagramSvg, type LineDiagramData, type LineDiagramOptions, type DiagramPeak } from "./line-diagram.js";
+export type { MemberDrawing, DrawnSupport, DrawnSupportType, DrawnLoad } from "./member-drawing.js";
+export { memberSvg, type MemberSvgOptions } from "./member-svg.js";
+export { sectionSvg, type SectionDrawing, type DrawnSectionPart } from "./section-svg.js";
+export { REPORT_CAUTION } from "./caution.js";
+export { reportInputs } from "./text-inputs.js";
+export { reportForces, reportSection, reportChecks } from "./text-results.js";
+export { textReport, type TextReportOptions } from "./text-report.js";
+export { reportDiagrams, type ReportDiagram, type ReportDiagramName, type ReportDiagramsOptions } from "./diagrams.js";

@@ -1,0 +1,91 @@
+import type { ModelDiagram } from "../model/index.js";
+
+/** How densely to sample a diagram for drawing. */
+export interface SampleDiagramOptions {
+  /** Points per polynomial piece, ends included; default 48 (at least 2). */
+  readonly pointsPerPiece?: number;
+}
+
+/**
+ * Samples exact polynomial pieces densely for drawing: every piece contributes its two ends and
+ * evenly spaced points between, so that breakpoints are always drawn and a jump between pieces
+ * (the value at the end of one piece differing from the start of the next) appears as two points
+ * at the same x. Values are those of the pieces, unchanged; this is for pictures only (peaks come
+ * exactly from the analysis, not from these samples).
+ *
+ * @param diagram - Contiguous pieces; on `[from, to]` the value is sum c_k (x - from)^k.
+ * @param options - Sampling density.
+ * @returns Points `[x, value]` in order of x, in the diagram's units.
+ * @example
+ * ```ts
+ * sampleDiagram({ unit: "kN", pieces: [{ from: 0, to: 2, coefficients: [5] }, { from: 2, to: 4, coefficients: [-5] }] });
+ * // [[0, 5], ..., [2, 5], [2, -5], ..., [4, -5]]
+ * ```
+ */
+export function sampleDiagram(diagram: ModelDiagram, options: SampleDiagramOptions = {}): readonly (readonly [number, number])[] {
+  const n = Math.max(2, Math.floor(options.pointsPerPiece ?? 48));
+  const out: (readonly [number, number])[] = [];
+  for (const piece of diagram.pieces) {
+    const width = piece.to - piece.from;
+    const count = width > 0 ? n : 1;
+    for (let i = 0; i < count; i++) {
+      const t = count === 1 ? 0 : i / (count - 1);
+      const x = i === count - 1 ? piece.to : piece.from + t * width;
+      out.push([x, evaluatePolynomial(piece.coefficients, x - piece.from)]);
+    }
+  }
+  return dropRepeats(out);
+}
+
+/**
+ * Evaluates sum c_k u^k by Horner's rule.
+ *
+ * @example
+ * ```ts
+ * evaluatePolynomial([1, 0, 2], 3); // 19
+ * ```
+ */
+export function evaluatePolynomial(coefficients: readonly number[], u: number): number {
+  let value = 0;
+  for (let k = coefficients.length - 1; k >= 0; k--) value = value * u + (coefficients[k] ?? 0);
+  return value;
+}
+
+/**
+ * The value of a diagram at `x` from the left (`side: "left"`) or the right (`"right"`, the
+ * default) at a breakpoint; outside the member, the nearest end value.
+ *
+ * @example
+ * ```ts
+ * const d = { unit: "kN", pieces: [{ from: 0, to: 2, coefficients: [5] }, { from: 2, to: 4, coefficients: [-5] }] };
+ * diagramValueAt(d, 2, "left"); // 5
+ * diagramValueAt(d, 2);         // -5
+ * ```
+ */
+export function diagramValueAt(diagram: ModelDiagram, x: number, side: "left" | "right" = "right"): number {
+  const pieces = diagram.pieces;
+  if (pieces.length === 0) return 0;
+  let chosen = pieces[pieces.length - 1];
+  for (const piece of pieces) {
+    const inside = side === "left" ? x > piece.from && x <= piece.to : x >= piece.from && x < piece.to;
+    if (inside) {
+      chosen = piece;
+      break;
+    }
+  }
+  const first = pieces[0];
+  if (first !== undefined && x <= first.from) chosen = first;
+  if (chosen === undefined) return 0;
+  const u = Math.min(Math.max(x, chosen.from), chosen.to) - chosen.from;
+  return evaluatePolynomial(chosen.coefficients, u);
+}
+
+function dropRepeats(points: readonly (readonly [number, number])[]): readonly (readonly [number, number])[] {
+  const out: (readonly [number, number])[] = [];
+  for (const p of points) {
+    const last = out[out.length - 1];
+    if (last !== undefined && last[0] === p[0] && last[1] === p[1]) continue;
+    out.push(p);
+  }
+  return out;
+}

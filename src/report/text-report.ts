@@ -1,0 +1,39 @@
+import type { ModelAnalysis } from "../model/index.js";
+import { REPORT_CAUTION, wrapText } from "./caution.js";
+import { reportInputs } from "./text-inputs.js";
+import { reportChecks, reportForces, reportSection } from "./text-results.js";
+
+/** Layout of the text report. */
+export interface TextReportOptions {
+  /** Width at which prose (the caution, the description) is wrapped; default 96 characters. */
+  readonly width?: number;
+}
+
+/**
+ * The readable plain-text report of an analysed model: heading, inputs echoed with their units,
+ * reactions, peaks of shear, moment, slope and deflection with their locations, section
+ * properties, extreme bending stresses, checks with utilisation and PASS/FAIL, warnings, and the
+ * caution. Every value is in the model's own units, named beside it. Pure: no I/O.
+ *
+ * @param analysis - What `analyzeModel` returned.
+ * @param options - Layout.
+ * @returns The report, ending with a line feed.
+ * @example
+ * ```ts
+ * const text = textReport(analyzeModel(parseModel(json)));
+ * console.log(text);
+ * ```
+ */
+export function textReport(analysis: ModelAnalysis, options: TextReportOptions = {}): string {
+  const width = Math.max(40, options.width ?? 96);
+  const model = analysis.model;
+  const title = `flexura report: ${model.name ?? "unnamed member"}`;
+  const parts: string[] = [`${title}\n${"=".repeat(Math.min(width, title.length))}`];
+  if (model.description !== undefined) parts.push(wrapText(model.description, width));
+  parts.push(wrapText(REPORT_CAUTION, width));
+  parts.push(reportInputs(model), reportForces(analysis));
+  const section = reportSection(analysis);
+  if (section !== "") parts.push(section);
+  parts.push(reportChecks(analysis));
+  return `${parts.join("\n\n")}\n`;
+}
