@@ -17,7 +17,6 @@ export { evaluatePiecewise, evaluatePiecewiseMany, extremesOf } from "./math/ind
 export type { PointLoad, CoupleLoad, DistributedLoad, Load, LoadResultant } from "./loads/index.js";
 export type { Support, SupportKind } from "./supports/index.js";
 export * from "./section/index.js";
-export * from "./model/index.js";
 export * from "./stress/index.js";
 // The member checks are served from `flexura/check` only: re-exporting them here would put the
 // main entry over its size budget (scripts/size-check.mjs).
