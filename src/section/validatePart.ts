@@ -67,9 +67,12 @@ function checkPolygon(found: IssueCollector, part: Record<string, unknown>, path
     return;
   }
   let ok = true;
-  points.forEach((p: unknown, i) => {
+  for (let i = 0; i < points.length; i++) {
+    const p: unknown = points[i];
+    // fast path for a well-formed point; the full check (with its path) only when one is not
+    if (isObject(p) && typeof p["y"] === "number" && Number.isFinite(p["y"]) && typeof p["z"] === "number" && Number.isFinite(p["z"])) continue;
     if (!checkPoint(found, p, [...path, "points", i], `point ${i}`)) ok = false;
-  });
+  }
   if (!ok) return;
   const { zs, ys } = normalisedPolygon(points as { y: number; z: number }[]);
   if (zs.length < 3) {
