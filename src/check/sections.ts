@@ -1,6 +1,6 @@
 import { requireFinite, type IssueCollector, type IssuePath } from "../errors/index.js";
 import { sectionProperties, type Section, type SectionPropertiesOptions } from "../section/index.js";
-import { tryExtremeBendingStresses, tryPeakShearStress, trySectionPeakShearStress, type BendingPropertiesWithExtremes, type DepthBand } from "../stress/index.js";
+import { tryExtremeBendingStresses, tryPeakShearStress, trySectionPeakShearStress, type BendingPropertiesWithExtremes, type DepthBand, type FibreExtremes } from "../stress/index.js";
 
 /** One part of a multi-material section, for the stress in each material. */
 export interface MemberSectionPart {
@@ -9,7 +9,7 @@ export interface MemberSectionPart {
   /** True for a hole (left out). */
   readonly hole: boolean;
   /** The part's top and bottom y about the (transformed) centroid (length). */
-  readonly extremes: { readonly top: number; readonly bottom: number };
+  readonly extremes: FibreExtremes;
 }
 
 /** The properties the member checks read; the section module's properties object fits. */
