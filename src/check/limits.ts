@@ -67,6 +67,11 @@ export type AllowableBendingStress = number | TensionCompressionAllowables;
 export interface MemberLimits {
   /** Allowable bending stress (force / length^2, > 0). */
   readonly bendingStress?: AllowableBendingStress;
+  /**
+   * Allowable bending stress in each part of a multi-material section, by part index (null or a
+   * missing entry: that part is not checked); needs sections given with their `parts`.
+   */
+  readonly bendingStressByPart?: readonly (AllowableBendingStress | null)[];
   /** Allowable shear stress (force / length^2, > 0). */
   readonly shearStress?: number;
   /** Deflection limits; each gives one check per span and cantilever. */
@@ -81,15 +86,20 @@ export function checkPositive(found: IssueCollector, value: unknown, path: Issue
   return false;
 }
 
+/** Validates one allowable bending stress. */
+function checkAllowable(found: IssueCollector, b: AllowableBendingStress | null | undefined, path: IssuePath): void {
+  if (typeof b === "object" && b !== null) {
+    checkPositive(found, b.tension, [...path, "tension"], "allowable tensile bending stress");
+    checkPositive(found, b.compression, [...path, "compression"], "allowable compressive bending stress");
+  } else if (b !== undefined && b !== null) {
+    checkPositive(found, b, path, "allowable bending stress");
+  }
+}
+
 /** Validates the limits, recording every issue. */
 export function checkLimits(found: IssueCollector, limits: MemberLimits, path: IssuePath): void {
-  const b = limits.bendingStress;
-  if (typeof b === "object" && b !== null) {
-    checkPositive(found, b.tension, [...path, "bendingStress", "tension"], "allowable tensile bending stress");
-    checkPositive(found, b.compression, [...path, "bendingStress", "compression"], "allowable compressive bending stress");
-  } else if (b !== undefined) {
-    checkPositive(found, b, [...path, "bendingStress"], "allowable bending stress");
-  }
+  checkAllowable(found, limits.bendingStress, [...path, "bendingStress"]);
+  limits.bendingStressByPart?.forEach((b, i) => checkAllowable(found, b, [...path, "bendingStressByPart", i]));
   if (limits.shearStress !== undefined) checkPositive(found, limits.shearStress, [...path, "shearStress"], "allowable shear stress");
   deflectionLimits(limits).forEach((d, i) => {
     const p = Array.isArray(limits.deflection) ? [...path, "deflection", i] : [...path, "deflection"];
@@ -117,8 +127,7 @@ export function deflectionLimits(limits: MemberLimits): readonly DeflectionLimit
 }
 
 /** The allowable tensile and compressive bending stresses, or null when not checked. */
-export function bendingAllowables(limits: MemberLimits): { tension: number; compression: number } | null {
-  const b = limits.bendingStress;
-  if (b === undefined) return null;
+export function bendingAllowables(b: AllowableBendingStress | null | undefined): { tension: number; compression: number } | null {
+  if (b === undefined || b === null) return null;
   return typeof b === "number" ? { tension: b, compression: b } : b;
 }

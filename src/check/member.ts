@@ -1,4 +1,4 @@
-import { IssueCollector, attempt, type Result } from "../errors/index.js";
+import { IssueCollector, attempt, fail, type Result } from "../errors/index.js";
 import { spanDeflections, type SpanDeflection } from "./deflection.js";
 import { bendingAllowables, checkLimits, deflectionLimits, type DeflectionLimit, type MemberLimits } from "./limits.js";
 import { stressesOf, type MemberStresses, type PeakBendingStress } from "./peaks.js";
@@ -25,7 +25,7 @@ export interface MemberCheck {
 
 function bendingFormula(p: PeakBendingStress, sense: "t" | "c"): string {
   const which = p.moment >= 0 ? "sagging" : "hogging";
-  return `sigma_${sense} = |M y_${p.fibre} / I_z|, ${which}`;
+  return p.part < 0 ? `sigma_${sense} = |M y_${p.fibre} / I_z|, ${which}` : `sigma_${sense} = |n M y / I_z| at part ${p.part}'s ${p.fibre}, ${which}`;
 }
 
 function deflectionCheck(limit: DeflectionLimit, d: SpanDeflection, index: number): CheckResult {
@@ -70,13 +70,19 @@ export function checkMember(solution: CheckedSolution, sections: MemberSections,
   const stresses = stressesOf(solution, stretches);
   const deflections = spanDeflections(solution);
   const checks: CheckResult[] = [];
-  const allow = bendingAllowables(limits);
-  if (allow !== null) {
-    const t = stresses.tension;
-    const c = stresses.compression;
-    checks.push(checkResult("bending-tension", "bending stress, tension", t.stress, allow.tension, { x: t.x, fibre: t.fibre, y: t.y, stretch: t.stretch }, bendingFormula(t, "t")));
-    checks.push(checkResult("bending-compression", "bending stress, compression", -c.stress + 0, allow.compression, { x: c.x, fibre: c.fibre, y: c.y, stretch: c.stretch }, bendingFormula(c, "c")));
-  }
+  const bending = (t: PeakBendingStress, c: PeakBendingStress, allow: { tension: number; compression: number }, suffix: string): void => {
+    checks.push(checkResult("bending-tension", `bending stress, tension${suffix}`, t.stress, allow.tension, { x: t.x, fibre: t.fibre, y: t.y, stretch: t.stretch }, bendingFormula(t, "t")));
+    checks.push(checkResult("bending-compression", `bending stress, compression${suffix}`, -c.stress + 0, allow.compression, { x: c.x, fibre: c.fibre, y: c.y, stretch: c.stretch }, bendingFormula(c, "c")));
+  };
+  const allow = bendingAllowables(limits.bendingStress);
+  if (allow !== null) bending(stresses.tension, stresses.compression, allow, "");
+  limits.bendingStressByPart?.forEach((b, i) => {
+    const partAllow = bendingAllowables(b);
+    if (partAllow === null) return;
+    const p = stresses.parts.find((q) => q.part === i);
+    if (p === undefined) fail("part-not-found", ["limits", "bendingStressByPart", i], `No part ${i} in the sections' parts: give the sections with their parts (memberSection does) or remove this limit.`);
+    bending(p.tension, p.compression, partAllow, `, part ${i}`);
+  });
   if (limits.shearStress !== undefined && stresses.shear !== null) {
     const v = stresses.shear;
     checks.push(checkResult("shear-stress", "shear stress", v.stress, limits.shearStress, { x: v.x, y: v.y, stretch: v.stretch }, "tau = |V| Q / (I_z b)"));

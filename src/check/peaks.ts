@@ -18,6 +18,18 @@ export interface PeakBendingStress {
   readonly moment: number;
   /** Index of the section stretch (0 for a uniform member). */
   readonly stretch: number;
+  /** For a section given with its parts: the part's index (`fibre` is then the part's top or bottom); -1 otherwise. */
+  readonly part: number;
+}
+
+/** The peak bending stresses in one part of a multi-material section. */
+export interface PartPeakStresses {
+  /** The part's index. */
+  readonly part: number;
+  /** The most tensile stress in the part. */
+  readonly tension: PeakBendingStress;
+  /** The most compressive stress in the part. */
+  readonly compression: PeakBendingStress;
 }
 
 /** The peak shear stress along a member. */
@@ -44,29 +56,37 @@ export interface MemberStresses {
   readonly compression: PeakBendingStress;
   /** The largest shear stress and where; null when no stretch described its section for shear. */
   readonly shear: PeakShearStress | null;
+  /** Peaks in each part, when the sections were given with their parts (multi-material); empty otherwise. */
+  readonly parts: readonly PartPeakStresses[];
 }
 
-function at(stress: number, x: number, fibre: ExtremeFibre, y: number, moment: number, stretch: number): PeakBendingStress {
-  return { stress: stress + 0, x, fibre, y, moment, stretch };
+function at(stress: number, x: number, fibre: ExtremeFibre, y: number, moment: number, stretch: number, part = -1): PeakBendingStress {
+  return { stress: stress + 0, x, fibre, y, moment, stretch, part };
 }
 
 /** Peak stresses from validated stretches. */
 export function stressesOf(solution: CheckedSolution, stretches: readonly ResolvedStretch[]): MemberStresses {
   let tension = at(0, 0, "bottom", stretches[0]?.bottom ?? 0, 0, 0);
   let compression = at(0, 0, "top", stretches[0]?.top ?? 0, 0, 0);
+  const parts = new Map<number, { tension: PeakBendingStress; compression: PeakBendingStress }>();
   let shear: PeakShearStress | null = null;
   stretches.forEach((s, i) => {
     const m = extremesOf(solution.moment, s.from, s.to);
-    // sagging (M > 0): bottom in tension, top in compression; hogging (M < 0): the reverse
-    const candidates = [
-      at((-m.max.value * s.bottom) / s.inertia, m.max.at, "bottom", s.bottom, m.max.value, i),
-      at((-m.max.value * s.top) / s.inertia, m.max.at, "top", s.top, m.max.value, i),
-      at((-m.min.value * s.top) / s.inertia, m.min.at, "top", s.top, m.min.value, i),
-      at((-m.min.value * s.bottom) / s.inertia, m.min.at, "bottom", s.bottom, m.min.value, i),
-    ];
-    for (const c of candidates) {
-      if (c.stress > tension.stress) tension = c;
-      if (c.stress < compression.stress) compression = c;
+    // sagging (M > 0) puts fibres below the centroid in tension, hogging (M < 0) those above
+    for (const [part, n, y, fibre] of s.fibres) {
+      for (const e of [m.max, m.min]) {
+        const c = at((-n * e.value * y) / s.inertia, e.at, fibre, y, e.value, i, part);
+        if (c.stress > tension.stress) tension = c;
+        if (c.stress < compression.stress) compression = c;
+        if (part < 0) continue;
+        const old = parts.get(part);
+        if (old === undefined) parts.set(part, { tension: c, compression: c });
+        else {
+          if (c.stress > old.tension.stress) parts.set(part, { ...old, tension: c });
+          const now = parts.get(part)!;
+          if (c.stress < now.compression.stress) parts.set(part, { ...now, compression: c });
+        }
+      }
     }
     if (s.unitShear !== null) {
       const v = extremesOf(solution.shear, s.from, s.to);
@@ -75,7 +95,8 @@ export function stressesOf(solution: CheckedSolution, stretches: readonly Resolv
       if (shear === null || stress > shear.stress) shear = { stress, x: big.at, y: s.unitShear.y, shear: big.value, stretch: i };
     }
   });
-  return { kind: "member-stresses", tension, compression, shear };
+  const byPart = [...parts.entries()].sort((a, b) => a[0] - b[0]).map(([part, p]): PartPeakStresses => ({ part, ...p }));
+  return { kind: "member-stresses", tension, compression, shear, parts: byPart };
 }
 
 /**

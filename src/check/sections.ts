@@ -1,15 +1,33 @@
-import type { IssueCollector} from "../errors/index.js";
-import { requireFinite, type IssuePath } from "../errors/index.js";
+import { requireFinite, type IssueCollector, type IssuePath } from "../errors/index.js";
 import { sectionProperties, type Section, type SectionPropertiesOptions } from "../section/index.js";
-import { tryExtremeBendingStresses, tryPeakShearStress, trySectionPeakShearStress, type BendingPropertiesWithExtremes, type DepthBand } from "../stress/index.js";
+import { tryExtremeBendingStresses, tryPeakShearStress, trySectionPeakShearStress, type BendingPropertiesWithExtremes, type DepthBand, type FibreExtremes } from "../stress/index.js";
+
+/** One part of a multi-material section, for the stress in each material. */
+export interface MemberSectionPart {
+  /** n = E of the part / E of the reference material (> 0). */
+  readonly modularRatio: number;
+  /** True for a hole (left out). */
+  readonly hole: boolean;
+  /** The part's top and bottom y about the (transformed) centroid (length). */
+  readonly extremes: FibreExtremes;
+}
+
+/** The properties the member checks read; the section module's properties object fits. */
+export interface MemberSectionProperties extends BendingPropertiesWithExtremes {
+  /**
+   * The parts, for a multi-material section: stresses are then found in each part as
+   * sigma = -n M y / I_z at its top and bottom, and the peaks are those of any part.
+   */
+  readonly parts?: readonly MemberSectionPart[];
+}
 
 /** A section as the member checks need it. */
 export interface MemberSection {
   /**
-   * I_z (length^4, > 0; transformed for several materials) and the extreme fibres `{ top, bottom }`
-   * about the centroid (length). The section module's properties object fits.
+   * I_z (length^4, > 0; transformed for several materials), the extreme fibres `{ top, bottom }`
+   * about the centroid (length) and optionally the parts. The section module's properties object fits.
    */
-  readonly properties: BendingPropertiesWithExtremes;
+  readonly properties: MemberSectionProperties;
   /**
    * The section for the shear stress, needed when a shear limit is given: a section from the
    * section module, or depth bands about its centroid.
@@ -57,6 +75,8 @@ export interface ResolvedStretch {
   readonly bottom: number;
   /** Peak shear stress per unit shear force and its height, or null when no bands were given. */
   readonly unitShear: { readonly stress: number; readonly y: number } | null;
+  /** Fibres to check: [part index (-1 for the whole section), n, y, which]. */
+  readonly fibres: readonly (readonly [number, number, number, "top" | "bottom"])[];
 }
 
 /** Validates the sections against a member of `length` and reduces them to numbers. */
@@ -99,7 +119,18 @@ export function resolveSections(found: IssueCollector, sections: MemberSections,
       }
       unitShear = { stress: Math.abs(peak.value.stress), y: peak.value.y };
     }
-    out.push({ from: s.from, to: s.to, inertia: s.properties.secondMomentZ, top: s.properties.extremes.top, bottom: s.properties.extremes.bottom, unitShear });
+    const fibres: [number, number, number, "top" | "bottom"][] = [];
+    const parts = s.properties.parts;
+    if (parts === undefined) fibres.push([-1, 1, s.properties.extremes.top, "top"], [-1, 1, s.properties.extremes.bottom, "bottom"]);
+    else
+      parts.forEach((part, k) => {
+        if (part.hole) return;
+        const n = part.modularRatio;
+        const q = [...p, "properties", "parts", k];
+        const ok = requireFinite(found, n, [...q, "modularRatio"], "modular ratio") && requireFinite(found, part.extremes.top, [...q, "extremes", "top"], "part's top") && requireFinite(found, part.extremes.bottom, [...q, "extremes", "bottom"], "part's bottom");
+        if (ok) fibres.push([k, n, part.extremes.top, "top"], [k, n, part.extremes.bottom, "bottom"]);
+      });
+    out.push({ from: s.from, to: s.to, inertia: s.properties.secondMomentZ, top: s.properties.extremes.top, bottom: s.properties.extremes.bottom, unitShear, fibres });
   });
   return out;
 }

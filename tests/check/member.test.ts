@@ -150,6 +150,33 @@ describe("checkMember: published beam formulas", () => {
     expect(same.shear!.stress).toBeCloseTo(fromBands.shear!.stress, 9);
   });
 
+  it("checkMember(timber joist with a steel plate below): each material checked against its own allowable", () => {
+    // Transformed section (Gere and Goodno, Mechanics of Materials, Sec. 6.3, from memory); M_max = w L^2 / 8 (AISC Table 3-23 case 1, from memory).
+    const timber = { name: "timber", elasticModulus: 10_000 };
+    const steel = { name: "steel", elasticModulus: 200_000 };
+    const s = section([
+      { kind: "polygon", points: [{ z: 0, y: 10 }, { z: 150, y: 10 }, { z: 150, y: 310 }, { z: 0, y: 310 }], material: timber },
+      { kind: "polygon", points: [{ z: 0, y: 0 }, { z: 150, y: 0 }, { z: 150, y: 10 }, { z: 0, y: 10 }], material: steel },
+    ]);
+    const ms = memberSection(s);
+    const [L, w] = [5000, 20];
+    const solution = solveBeam(simpleSpan(L, 10_000 * ms.properties.secondMomentZ, w));
+    const r = checkMember(solution, ms, { bendingStressByPart: [12, { tension: 165, compression: 165 }] });
+    const m = (w * L * L) / 8;
+    // transformed section by the parallel-axis theorem (closed form)
+    const nA = 20 * 1500;
+    const c = (nA * 5 + 45000 * 160) / (nA + 45000);
+    const it = (150 * 300 ** 3) / 12 + 45000 * (160 - c) ** 2 + 20 * ((150 * 10 ** 3) / 12 + 1500 * (5 - c) ** 2);
+    const steelT = r.checks.find((x) => x.label === "bending stress, tension, part 1")!;
+    expect(steelT.demand).toBeCloseTo((20 * m * c) / it, 6);
+    const timberC = r.checks.find((x) => x.label === "bending stress, compression, part 0")!;
+    expect(timberC.demand).toBeCloseTo((m * (310 - c)) / it, 6);
+    expect(r.stresses.parts.map((p) => p.part)).toEqual([0, 1]);
+    expect(r.stresses.tension.part).toBe(1);
+    const missing = tryCheckMember(solution, rectangleSection(100, 100), { bendingStressByPart: [10] });
+    expect(missing.ok || missing.error.code).toBe("part-not-found");
+  });
+
   it("spanDeflections measures a settled span from its chord", () => {
     const solution = solveBeam({ length: 5000, stiffness: 1e12, supports: [{ kind: "pin", at: 0 }, { kind: "roller", at: 5000, settlement: 10 }], loads: [] });
     expect(Math.abs(spanDeflections(solution)[0]!.deflection)).toBeLessThan(1e-9);
