@@ -3,7 +3,8 @@
 // A function returns a number, or a string starting with "#" that says what is wrong, as a cell shows.
 // Units are fixed per function and named in its name's documentation: here kN, m, mm, MPa.
 // Run: node node_modules/.bin/unrun examples/flat-functions.ts
-import { analyzeModel, attempt, formatPath, parseModel, type ModelAnalysis } from "../src/index.js";
+import { attempt, formatPath } from "../src/errors/index.js";
+import { analyzeModel, parseModel, type ModelAnalysis } from "../src/model/index.js";
 
 /** A flat-function answer: a number, or "#" and a message. */
 export type Cell = number | string;

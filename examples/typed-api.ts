@@ -1,8 +1,9 @@
 // Using flexura's typed API inside an app (Node or browser).
-// In your own code, import from "flexura" (and the report from "flexura/report"); inside this
+// In your own code, import from "flexura", "flexura/model" and "flexura/report"; inside this
 // repository the examples import the source.
 // Run: node node_modules/.bin/unrun examples/typed-api.ts
-import { analyzeModel, formatPath, tryParseModel, type ModelAnalysis } from "../src/index.js";
+import { formatPath } from "../src/errors/index.js";
+import { analyzeModel, tryParseModel, type ModelAnalysis } from "../src/model/index.js";
 import { textReport } from "../src/report/index.js";
 
 /** A member an app might build from its own screens: a timber joist over a 4.2 m span (invented). */

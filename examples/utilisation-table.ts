@@ -4,7 +4,8 @@
 // Run: node node_modules/.bin/unrun examples/utilisation-table.ts examples/models
 import { readdirSync, readFileSync } from "node:fs";
 import { join } from "node:path";
-import { analyzeModel, formatPath, tryParseModel } from "../src/index.js";
+import { formatPath } from "../src/errors/index.js";
+import { analyzeModel, tryParseModel } from "../src/model/index.js";
 import { textTable } from "../src/report/index.js";
 
 const folder = process.argv[2] ?? join(import.meta.dirname, "models");
