@@ -11,7 +11,7 @@ const joist = {
   name: "Deck joist J7",
   units: { length: "m", force: "kN", deflection: "mm", stress: "MPa" },
   length: 4.2,
-  section: { shape: "rectangle", width: 45, depth: 240 },
+  section: { shape: "rectangle", width: 45, depth: 290 },
   material: { name: "graded timber", E: "10 GPa" },
   supports: [
     { at: 0, type: "pin" },
