@@ -24,4 +24,16 @@ export default defineConfig([
     outDir: "dist",
     external: ["decimal.js"],
   },
+  // The `flexura` command: its own ESM bundle for Node (the only code that uses node: modules).
+  {
+    entry: { cli: "src/cli/main.ts" },
+    format: ["esm"],
+    dts: false,
+    sourcemap: false,
+    clean: false,
+    platform: "node",
+    target: "node20",
+    outDir: "dist",
+    external: ["decimal.js"],
+  },
 ]);

@@ -47,6 +47,10 @@ export { ok, q };
   );
   run("node", ["esm.mjs"]);
   run("node", ["cjs.cjs"]);
+  // The installed `flexura` bin runs and answers.
+  const version = execFileSync(join(dir, "node_modules", ".bin", "flexura"), ["--version"], { cwd: dir, encoding: "utf8" }).trim();
+  if (version === "" || version === "unknown") throw new Error(`smoke: flexura --version printed ${JSON.stringify(version)}`);
+  console.log(`smoke bin ok: flexura ${version}`);
   run("node", [join(root, "node_modules", "typescript", "bin", "tsc"), "-p", "tsconfig.json"]);
   console.log("smoke typescript ok");
 } finally {

@@ -1,9 +1,10 @@
 import type { ModelAnalysis, ModelDiagram, ModelPeaks } from "../model/index.js";
-import { formatReportQuantity } from "./format.js";
+import { formatReportQuantity, snapToZero } from "./format.js";
 import { lineDiagramSvg } from "./line-diagram.js";
 import type { DrawnLoad, MemberDrawing } from "./member-drawing.js";
 import { memberSvg } from "./member-svg.js";
 import { diagramValueAt, sampleDiagram } from "./sample.js";
+import { outlines } from "../section/index.js";
 import { sectionSvg, type DrawnSectionPart, type SectionDrawing } from "./section-svg.js";
 
 /** Which picture a {@link ReportDiagram} is. */
@@ -22,8 +23,9 @@ export interface ReportDiagram {
 /** What to add to the drawings of {@link reportDiagrams}. */
 export interface ReportDiagramsOptions {
   /**
-   * Outlines of the cross-section, `[z, y]` points in the model's section-length unit; when
-   * given with a section result, a section drawing with the bending-stress profile is added.
+   * Outlines of the cross-section, `[z, y]` points in the model's section-length unit. By
+   * default they are drawn from the analysis's own section (`sectionGeometry`); give them to
+   * draw something else.
    */
   readonly sectionOutline?: readonly DrawnSectionPart[];
 }
@@ -31,8 +33,8 @@ export interface ReportDiagramsOptions {
 /**
  * Every diagram of an analysed model, as SVG strings: the member with its supports and loads to
  * scale; shear, bending moment and deflection along the member with their peaks labelled; and,
- * when `sectionOutline` is given and the model has a section, the cross-section with its
- * centroid, neutral axis and bending-stress profile at the governing stress. Pure: no I/O.
+ * when the model has a section, the cross-section with its centroid, neutral axis and
+ * bending-stress profile at the governing stress. Pure: no I/O.
  *
  * @param analysis - What `analyzeModel` returned.
  * @param options - Extra drawings.
@@ -51,6 +53,7 @@ export function reportDiagrams(analysis: ModelAnalysis, options: ReportDiagramsO
   out.push({ name: "member", title: member.title, svg: memberSvg(member) });
   const line = (key: "shear" | "moment" | "deflection", title: string, diagram: ModelDiagram, peaks: ModelPeaks, colour: string): ReportDiagram => {
     const full = `${name}: ${title}`;
+    const reference = Math.max(Math.abs(peaks.max.value), Math.abs(peaks.min.value));
     const svg = lineDiagramSvg({
       title: full,
       length: model.length,
@@ -58,8 +61,8 @@ export function reportDiagrams(analysis: ModelAnalysis, options: ReportDiagramsO
       valueUnit: diagram.unit,
       points: sampleDiagram(diagram),
       peaks: [
-        { name: "max", ...peaks.max },
-        { name: "min", ...peaks.min },
+        { name: "max", at: peaks.max.at, value: snapToZero(peaks.max.value, reference) },
+        { name: "min", at: peaks.min.at, value: snapToZero(peaks.min.value, reference) },
       ],
       colour,
     });
@@ -68,9 +71,22 @@ export function reportDiagrams(analysis: ModelAnalysis, options: ReportDiagramsO
   out.push(line("shear", "shear force", analysis.diagrams.shear, analysis.shear, "#1f4e8c"));
   out.push(line("moment", "bending moment (positive = sagging)", analysis.diagrams.moment, analysis.moment, "#7a3e9d"));
   out.push(line("deflection", "deflection (positive = upward)", analysis.diagrams.deflection, analysis.deflection, "#2e7d32"));
-  const section = sectionDrawing(analysis, name, options.sectionOutline);
+  const section = sectionDrawing(analysis, name, options.sectionOutline ?? sectionOutlineOf(analysis));
   if (section !== undefined) out.push({ name: "section", title: section.title, svg: sectionSvg(section) });
   return out;
+}
+
+/** The analysis's own cross-section as outlines in the model's section-length unit. */
+function sectionOutlineOf(analysis: ModelAnalysis): readonly DrawnSectionPart[] | undefined {
+  const geometry = analysis.sectionGeometry;
+  if (geometry === undefined) return undefined;
+  const k = 1 / analysis.scale.sectionLength;
+  const fallback = analysis.model.material?.name ?? "material";
+  return outlines(geometry).map((o) => ({
+    points: o.points.map((p) => [p.z * k, p.y * k] as const),
+    hole: o.hole,
+    material: geometry.parts[o.part]?.material?.name ?? fallback,
+  }));
 }
 
 function memberDrawing(analysis: ModelAnalysis, name: string): MemberDrawing {

@@ -78,3 +78,20 @@ export function textTable(rows: readonly (readonly string[])[]): string {
   const rule = widths.map((w) => "-".repeat(w)).join("  ");
   return [line(header), rule, ...body.map(line)].join("\n");
 }
+
+/**
+ * Rounds to zero a value that is round-off next to `reference` (at most 1e-9 of it), so that a
+ * report shows `0` rather than `1.455e-14` for a moment at a pinned end. Other values are
+ * returned unchanged.
+ *
+ * @param value - The value, in any unit.
+ * @param reference - A magnitude of the same quantity, such as its largest absolute value.
+ * @example
+ * ```ts
+ * snapToZero(1.455e-14, 9.76); // 0
+ * snapToZero(0.2, 9.76);       // 0.2
+ * ```
+ */
+export function snapToZero(value: number, reference: number): number {
+  return Math.abs(value) <= 1e-9 * Math.abs(reference) ? 0 : value;
+}

@@ -118,9 +118,12 @@ function pointOrCouple(load: DrawnLoad, member: MemberDrawing, sx: Scale, bigges
 function distributedLoads(member: MemberDrawing, sx: Scale): string {
   const loads = member.loads.filter((l): l is Extract<DrawnLoad, { kind: "distributed" }> => l.kind === "distributed");
   const biggest = Math.max(0, ...loads.map((l) => Math.max(Math.abs(l.start), Math.abs(l.end))));
-  const height = (w: number): number => (biggest > 0 ? 12 + 38 * (Math.abs(w) / biggest) : 12);
+  // Bands are stacked one above the other so that none hides another; the whole stack stays
+  // within about 80 pixels, each band at least 12 pixels high, sized by its intensity.
+  const room = Math.max(40, 80 / Math.max(1, loads.length));
+  const height = (w: number): number => (biggest > 0 ? 12 + (room - 12) * (Math.abs(w) / biggest) : 12);
   const parts: string[] = [];
-  const base = BEAM_Y - 6;
+  let base = BEAM_Y - 6;
   for (const l of loads) {
     const x0 = sx(l.from);
     const x1 = sx(l.to);
@@ -139,7 +142,10 @@ function distributedLoads(member: MemberDrawing, sx: Scale): string {
     const label = same
       ? `${formatReportNumber(l.start)} ${member.distributedUnit}`
       : `${formatReportNumber(l.start)} to ${formatReportNumber(l.end)} ${member.distributedUnit}`;
-    parts.push(svgText((x0 + x1) / 2, Math.min(top0, top1) - 6, label, { "text-anchor": "middle", fill: LOAD_COLOUR }));
+    parts.push(
+      svgText((x0 + x1) / 2, Math.min(top0, top1) - 4, label, { "text-anchor": "middle", fill: LOAD_COLOUR, stroke: "white", "stroke-width": 3, "paint-order": "stroke" }),
+    );
+    base = Math.min(top0, top1) - 16;
   }
   return parts.join("");
 }

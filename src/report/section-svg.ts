@@ -132,8 +132,8 @@ function stressProfile(section: SectionDrawing, py: (y: number) => number, yMin:
   parts.push(svgText(565, 46, `Bending stress (${section.stressUnit}), tension positive`, { "text-anchor": "middle", "font-weight": "bold" }));
   parts.push(svgText(565, 62, section.stressNote, { "text-anchor": "middle", "font-size": 11, fill: "#444" }));
   parts.push(svgElement("line", { x1: x0, y1: py(yMax) - 10, x2: x0, y2: py(yMin) + 10, stroke: "#222", "stroke-width": 1.2 }));
-  parts.push(svgText(sx(-reach), py(yMin) + 28, "compression", { "text-anchor": "start", fill: COMPRESSION }));
-  parts.push(svgText(sx(reach), py(yMin) + 28, "tension", { "text-anchor": "end", fill: TENSION }));
+  parts.push(svgText(sx(-reach), py(yMin) + 34, "compression", { "text-anchor": "start", fill: COMPRESSION }));
+  parts.push(svgText(sx(reach), py(yMin) + 34, "tension", { "text-anchor": "end", fill: TENSION }));
   if (points.length < 2) return parts.join("");
   for (let i = 1; i < points.length; i++) {
     const [ya, sa] = points[i - 1] ?? [0, 0];
@@ -158,8 +158,8 @@ function stressProfile(section: SectionDrawing, py: (y: number) => number, yMin:
     const [y, s] = p;
     const above = p === last;
     parts.push(
-      svgText(sx(s), py(y) + (above ? -6 : 16), `${formatReportNumber(s)} ${section.stressUnit}`, {
-        "text-anchor": s >= 0 ? "start" : "end",
+      svgText(Math.min(WIDTH - 60, Math.max(460, sx(s))), py(y) + (above ? -6 : 16), `${formatReportNumber(s)} ${section.stressUnit}`, {
+        "text-anchor": "middle",
         "font-weight": "bold",
         fill: s >= 0 ? TENSION : COMPRESSION,
       }),

@@ -1,5 +1,5 @@
 import type { ModelAnalysis, ModelPeaks } from "../model/index.js";
-import { formatReportNumber, formatReportQuantity, textTable } from "./format.js";
+import { formatReportNumber, formatReportQuantity, snapToZero, textTable } from "./format.js";
 
 function indent(text: string): string {
   return text
@@ -22,6 +22,8 @@ function indent(text: string): string {
 export function reportForces(analysis: ModelAnalysis): string {
   const u = analysis.units;
   const out: string[] = ["REACTIONS (force positive upward, moment positive counterclockwise)", ""];
+  const forceScale = analysis.reactions.reduce((s, r) => s + Math.abs(r.force), 0);
+  const momentScale = analysis.reactions.reduce((s, r) => s + Math.abs(r.moment), 0) + forceScale * analysis.model.length;
   out.push(
     indent(
       textTable([
@@ -30,22 +32,25 @@ export function reportForces(analysis: ModelAnalysis): string {
           String(r.support + 1),
           r.kind,
           formatReportQuantity(r.at, u.length),
-          formatReportQuantity(r.force, u.force),
-          formatReportQuantity(r.moment, u.moment),
+          formatReportQuantity(snapToZero(r.force, forceScale), u.force),
+          formatReportQuantity(snapToZero(r.moment, momentScale), u.moment),
         ]),
       ]),
     ),
   );
   const sumUp = analysis.reactions.reduce((s, r) => s + r.force, 0);
-  out.push(`  Sum of vertical reactions: ${formatReportQuantity(sumUp, u.force)} upward`);
+  out.push(`  Sum of vertical reactions: ${formatReportQuantity(snapToZero(sumUp, forceScale), u.force)} upward`);
   out.push("", "PEAKS ALONG THE MEMBER", "");
-  const row = (name: string, p: ModelPeaks, unit: string): string[] => [
-    name,
-    formatReportQuantity(p.max.value, unit),
-    `x = ${formatReportQuantity(p.max.at, u.length)}`,
-    formatReportQuantity(p.min.value, unit),
-    `x = ${formatReportQuantity(p.min.at, u.length)}`,
-  ];
+  const row = (name: string, p: ModelPeaks, unit: string): string[] => {
+    const reference = Math.max(Math.abs(p.max.value), Math.abs(p.min.value));
+    return [
+      name,
+      formatReportQuantity(snapToZero(p.max.value, reference), unit),
+      `x = ${formatReportQuantity(p.max.at, u.length)}`,
+      formatReportQuantity(snapToZero(p.min.value, reference), unit),
+      `x = ${formatReportQuantity(p.min.at, u.length)}`,
+    ];
+  };
   out.push(
     indent(
       textTable([

@@ -5,6 +5,7 @@
 // deflection = wx(L^3 - 2Lx^2 + x^3)/(24EI), max 5wL^4/(384EI) at midspan.
 // Member: L = 6 m, w = 10 kN/m, E = 200 GPa, rectangle 100 mm x 300 mm (I = bd^3/12 = 225e6 mm^4),
 // so EI = 45 000 kN*m^2, max M = 45 kN*m, max deflection 3.75 mm, extreme stress M c / I = 30 MPa.
+import { solveBeam } from "../../src/beam/index.js";
 import type { Model, ModelAnalysis, ModelUnits } from "../../src/model/index.js";
 
 export const UNITS: ModelUnits = {
@@ -95,6 +96,16 @@ export function simpleSpanAnalysis(overrides: Partial<ModelAnalysis> = {}): Mode
       deflection: { unit: "mm", pieces: [{ from: 0, to: L, coefficients: [0, -1000 * k * L ** 3, 0, 2000 * k * L, -1000 * k] }] },
     },
     warnings: [],
+    // The solver's own result in SI units (N, m), which the report does not read.
+    solution: solveBeam({
+      length: L,
+      stiffness: EI * 1000,
+      supports: [
+        { kind: "pin", at: 0 },
+        { kind: "roller", at: L },
+      ],
+      loads: [{ kind: "distributed", from: 0, to: L, start: w * 1000, end: w * 1000 }],
+    }),
     ...overrides,
   };
 }

@@ -93,3 +93,13 @@ describe("text layout", () => {
     expect(wrapText("", 10)).toBe("");
   });
 });
+
+describe("snapToZero", () => {
+  test("snapToZero rounds round-off next to the reference to zero and keeps real values", async () => {
+    const { snapToZero } = await import("../../src/report/index.js");
+    expect(snapToZero(1.455e-14, 9.76)).toBe(0);
+    expect(snapToZero(-8.7e-16, 1.7)).toBe(0);
+    expect(snapToZero(0.2, 9.76)).toBe(0.2);
+    expect(snapToZero(1e-12, 0)).toBe(1e-12);
+  });
+});
