@@ -1,0 +1,103 @@
+/**
+ * Working storage for the solve, reused from one solve to the next so that a solve allocates
+ * only what it returns. Solves are synchronous; a solve started while another is under way (from
+ * a getter on the input, say) gets storage of its own, so no solve ever sees another's numbers.
+ * Arrays are at least as long as asked for, often longer: index them, never read `.length`.
+ */
+export interface Scratch {
+  /** Candidate node positions, before sorting and merging. */
+  raw: Float64Array;
+  /** Per element: E I, load intensity at each end, hinge release at the right end. */
+  ei: Float64Array;
+  wLeft: Float64Array;
+  wRight: Float64Array;
+  released: Uint8Array;
+  /** Per node: applied force and couple. */
+  force: Float64Array;
+  couple: Float64Array;
+  /** Per support: its node. */
+  supportNode: Int32Array;
+  /** Stiffness system: band, right-hand side (then displacements), prescribed flags and values. */
+  band: Float64Array;
+  rhs: Float64Array;
+  prescribed: Uint8Array;
+  value: Float64Array;
+  /** Per element: the four end forces. */
+  endForces: Float64Array;
+}
+
+function fresh(): Scratch {
+  return {
+    raw: new Float64Array(0),
+    ei: new Float64Array(0),
+    wLeft: new Float64Array(0),
+    wRight: new Float64Array(0),
+    released: new Uint8Array(0),
+    force: new Float64Array(0),
+    couple: new Float64Array(0),
+    supportNode: new Int32Array(0),
+    band: new Float64Array(0),
+    rhs: new Float64Array(0),
+    prescribed: new Uint8Array(0),
+    value: new Float64Array(0),
+    endForces: new Float64Array(0),
+  };
+}
+
+const shared = fresh();
+let sharedInUse = false;
+
+/** Storage for one solve: the shared one when free, else a new one. Give it back with {@link releaseScratch}. */
+export function acquireScratch(): Scratch {
+  if (sharedInUse) return fresh();
+  sharedInUse = true;
+  return shared;
+}
+
+/** Returns storage taken by {@link acquireScratch}. */
+export function releaseScratch(scratch: Scratch): void {
+  if (scratch === shared) sharedInUse = false;
+}
+
+/** Grows a capacity to at least `n`, with headroom so that slowly growing members do not reallocate each time. */
+function capacity(current: number, n: number): number {
+  return current >= n ? current : Math.max(n, 2 * current, 64);
+}
+
+/** Makes room for `count` candidate node positions. */
+export function ensureRaw(s: Scratch, count: number): void {
+  if (s.raw.length < count) s.raw = new Float64Array(capacity(s.raw.length, count));
+}
+
+/**
+ * Makes room for a member of `nodes` nodes and `supports` supports, and zeroes the per-node and
+ * per-element accumulators (the stiffness system is zeroed by its own solve).
+ */
+export function ensureNodes(s: Scratch, nodes: number, supports: number): void {
+  const elements = nodes - 1;
+  if (s.ei.length < elements) {
+    const c = capacity(s.ei.length, elements);
+    s.ei = new Float64Array(c);
+    s.wLeft = new Float64Array(c);
+    s.wRight = new Float64Array(c);
+    s.released = new Uint8Array(c);
+    s.endForces = new Float64Array(4 * c);
+  } else {
+    s.wLeft.fill(0, 0, elements);
+    s.wRight.fill(0, 0, elements);
+    s.released.fill(0, 0, elements);
+  }
+  if (s.force.length < nodes) {
+    const c = capacity(s.force.length, nodes);
+    s.force = new Float64Array(c);
+    s.couple = new Float64Array(c);
+    s.rhs = new Float64Array(2 * c);
+    s.prescribed = new Uint8Array(2 * c);
+    s.value = new Float64Array(2 * c);
+    s.band = new Float64Array(8 * c);
+  } else {
+    s.force.fill(0, 0, nodes);
+    s.couple.fill(0, 0, nodes);
+  }
+  if (s.supportNode.length < supports) s.supportNode = new Int32Array(capacity(s.supportNode.length, supports));
+}
