@@ -1,5 +1,5 @@
 import { DEFAULT_LOAD_CASE, type Load } from "../loads/index.js";
-import { ensureNodes, ensureRaw, type Scratch } from "./scratch.js";
+import { ensureNodes, ensureRaw, takeOutput, type Scratch } from "./scratch.js";
 import type { BeamInput, SolveOptions } from "./types.js";
 import { SAME_POINT } from "./validate.js";
 
@@ -117,7 +117,7 @@ export function buildModel(beam: BeamInput, options: SolveOptions | undefined, s
   if (n === 1) n = 2;
   raw[n - 1] = length;
   const elements = n - 1;
-  const output = new Float64Array(n + 18 * elements);
+  const output = takeOutput(n + 18 * elements);
   for (let i = 0; i < n; i++) output[i] = raw[i] as number;
   const x = output.subarray(0, n);
 

@@ -1,5 +1,5 @@
 import { evaluatePolynomial, type PiecewisePolynomial } from "../math/index.js";
-import { rootsToScratch, scratchRoots } from "../math/polynomial.js";
+import { clearOfZero, rootsToScratch, scratchRoots } from "../math/polynomial.js";
 import { restrainsDeflection, type Support } from "../supports/index.js";
 import type { BeamModel } from "./model.js";
 import type { BeamSpan, BeamWarning } from "./types.js";
@@ -24,7 +24,7 @@ export function contraflexurePoints(moment: PiecewisePolynomial, scale: number):
   for (let i = 0; i + 1 < b.length; i++) {
     const x0 = b[i] as number;
     const h = (b[i + 1] as number) - x0;
-    const count = rootsToScratch(c, i * stride, d, 0, h);
+    const count = clearOfZero(c, i * stride, d, h) ? 0 : rootsToScratch(c, i * stride, d, 0, h);
     let start = 0;
     for (let r = 0; r <= count; r++) {
       const end = r < count ? (scratchRoots[r] as number) : h;

@@ -1,6 +1,6 @@
 import { fail } from "../errors/index.js";
 import type { PiecewisePolynomial } from "./piecewise.js";
-import { evaluatePolynomial, rootsToScratch, scratchRoots } from "./polynomial.js";
+import { clearOfZero, evaluatePolynomial, rootsToScratch, scratchRoots } from "./polynomial.js";
 
 /** A value and where it occurs. */
 export interface LocatedValue {
@@ -74,7 +74,8 @@ export function extremesOf(pp: PiecewisePolynomial, lo?: number, hi?: number): E
     }
     if (e > a && d >= 2) {
       for (let k = 1; k <= d; k++) derivative[k - 1] = k * (c[o + k] as number);
-      const count = rootsToScratch(derivative, 0, d - 1, a, e);
+      // a piece whose derivative keeps one sign is monotone: its ends are its extremes
+      const count = clearOfZero(derivative, 0, d - 1, e) ? 0 : rootsToScratch(derivative, 0, d - 1, a, e);
       for (let r = 0; r < count; r++) {
         const t = scratchRoots[r] as number;
         v = evaluatePolynomial(c, o, d, t);

@@ -183,3 +183,26 @@ function bracketedRoot(c: ArrayLike<number>, off: number, d: number, a: number, 
   }
   return Math.abs(fa) < Math.abs(fb) ? a : b;
 }
+
+/**
+ * True when the polynomial `c[off] + ... + c[off+d] t^d` keeps one sign over `0 <= t <= h`
+ * by a wide margin: a bound from its terms (each `c_k t^k` lies between 0 and `c_k h^k`) stays
+ * more than 1e-9 of their total size away from zero. Such a polynomial has no root there, nor
+ * within the rounding slack {@link polynomialRootsIn} allows at the ends, so root finding on it
+ * can be skipped: the cheap test that spares most pieces of a diagram.
+ */
+export function clearOfZero(c: ArrayLike<number>, off: number, d: number, h: number): boolean {
+  let lo = c[off] as number;
+  let hi = lo;
+  let size = Math.abs(lo);
+  let p = 1;
+  for (let k = 1; k <= d; k++) {
+    p *= h;
+    const term = (c[off + k] as number) * p;
+    if (term > 0) hi += term;
+    else lo += term;
+    size += Math.abs(term);
+  }
+  const margin = 1e-9 * size;
+  return lo > margin || hi < -margin;
+}
