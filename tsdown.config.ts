@@ -9,6 +9,7 @@ export const entries = {
   model: "src/model/index.ts",
   report: "src/report/index.ts",
   stress: "src/stress/index.ts",
+  check: "src/check/index.ts",
 } as const;
 
 export default defineConfig([

@@ -8,6 +8,7 @@ import "./units.bench.js";
 import "./math.bench.js";
 import "./beam.bench.js";
 import "./stress.bench.js";
+import "./check.bench.js";
 import "./section.bench.js";
 
 const pattern = process.argv[2];

@@ -8,10 +8,11 @@ suite("units", () => {
   bench("units: parseQuantity with a cached unit (\"1.5 kip/ft\")", () => parseQuantity("1.5 kip/ft", "forcePerLength"));
   bench("units: parseQuantity with a cached SI unit (\"12 kN*m\")", () => parseQuantity("12 kN*m", "moment"));
   bench("units: unitFactor of a new compound unit (uncached)", () => {
-    // A space placed differently each time makes a cache miss; the grammar ignores it.
-    fresh = (fresh + 1) % 100;
+    // Spaces placed differently each time give 1000 distinct texts, more than the cache holds
+    // (256), so every call parses; the grammar ignores the spaces.
+    fresh = (fresh + 1) % 1000;
     const unit = compounds[fresh % compounds.length]!;
-    return unitFactor(`${" ".repeat(fresh)}${unit}`);
+    return unitFactor(`${" ".repeat(fresh % 40)}${unit}${" ".repeat(Math.floor(fresh / 40))}`);
   });
   bench("units: convertQuantity(\"29000 ksi\", stress, \"MPa\")", () => convertQuantity("29000 ksi", "stress", "MPa"));
   bench("units: convert(12.5, \"kip*ft\", \"kN*m\")", () => convert(12.5, "kip*ft", "kN*m"));

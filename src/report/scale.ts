@@ -46,12 +46,14 @@ export function niceTicks(min: number, max: number, count = 5): readonly number[
   const raw = (max - min) / Math.max(1, count);
   const power = 10 ** Math.floor(Math.log10(raw));
   const fraction = raw / power;
-  const step = (fraction <= 1 ? 1 : fraction <= 2 ? 2 : fraction <= 5 ? 5 : 10) * power;
+  const tolerance = 1e-9; // so that 2.0000000000000004 counts as 2
+  const step = (fraction <= 1 + tolerance ? 1 : fraction <= 2 + tolerance ? 2 : fraction <= 5 + tolerance ? 5 : 10) * power;
   const first = Math.ceil(min / step - 1e-9);
   const last = Math.floor(max / step + 1e-9);
   const ticks: number[] = [];
   for (let i = first; i <= last; i++) ticks.push(cleanZero(Number((i * step).toPrecision(12))));
-  return ticks;
+  // A coarse step can miss a short interval altogether: then its low end is the one tick.
+  return ticks.length > 0 ? ticks : [min];
 }
 
 /**

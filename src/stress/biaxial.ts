@@ -42,7 +42,7 @@ function validate(moments: BiaxialMoments, section: UnsymmetricBendingProperties
       found.add(
         "product-moment-too-large",
         ["section", "productMoment"],
-        `I_y I_z - I_yz^2 must be above zero (got ${det}); with I_yz^2 >= I_y I_z the section has no bending stiffness about one axis. Check the section properties.`,
+        `I_y I_z - I_yz^2 must be above zero (got ${det}): check the section properties.`,
         { determinant: det },
       );
     }

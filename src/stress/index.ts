@@ -15,3 +15,16 @@ export type { ShearProperties } from "./shear.js";
 export { shearStress, tryShearStress, shearFlow, tryShearFlow } from "./shear.js";
 export type { ShearStressPoint, ShearStressProfile, ShearStressProfileOptions } from "./shear-profile.js";
 export { shearStressAt, tryShearStressAt, peakShearStress, tryPeakShearStress, shearStressProfile, tryShearStressProfile } from "./shear-profile.js";
+export type { SectionStressOptions } from "./section-stress.js";
+export {
+  sectionShearStressAt,
+  trySectionShearStressAt,
+  sectionShearStressProfile,
+  trySectionShearStressProfile,
+  sectionPeakShearStress,
+  trySectionPeakShearStress,
+  sectionCornerStresses,
+  trySectionCornerStresses,
+} from "./section-stress.js";
+export type { PartStress, PartStresses, PartFibreStress } from "./section-parts.js";
+export { sectionPartStresses, trySectionPartStresses } from "./section-parts.js";

@@ -1,3 +1,4 @@
+import type { IssueCollector } from "../errors/index.js";
 import type { ShearStressPoint } from "./shear-profile.js";
 
 /**
@@ -89,3 +90,12 @@ export function findPeak(shear: number, source: CutSource, inertia: number, samp
   return Math.abs(refined.stress) > Math.abs(best.stress) ? refined : best;
 }
 
+
+/** Validates `pointsPerBand` (16 when omitted) and returns it. */
+export function checkPointsPerBand(found: IssueCollector, value: number | undefined): number {
+  const perBand = value ?? 16;
+  if (!Number.isInteger(perBand) || perBand < 1 || perBand > 1e5) {
+    found.add("points-per-band-invalid", ["options", "pointsPerBand"], `pointsPerBand must be a whole number from 1 to 100000; got ${String(perBand)}.`);
+  }
+  return perBand;
+}

@@ -1,7 +1,7 @@
 import { IssueCollector, attempt, requireFinite, type Result } from "../errors/index.js";
 import { bandLevels, checkBands, firstMomentAbove, widthAt, type DepthBand } from "./bands.js";
 import type { ShearProperties } from "./shear.js";
-import { findPeak, pointAt, profilePoints, type CutSource } from "./shear-peak.js";
+import { checkPointsPerBand, findPeak, pointAt, profilePoints, type CutSource } from "./shear-peak.js";
 import { checkSecondMoment } from "./validate.js";
 
 /** The shear stress at one height of a section. */
@@ -172,10 +172,7 @@ export function shearStressProfile(
 ): ShearStressProfile {
   const found = new IssueCollector();
   validate(shear, bands, section, found);
-  const perBand = options?.pointsPerBand ?? 16;
-  if (!Number.isInteger(perBand) || perBand < 1 || perBand > 1e5) {
-    found.add("points-per-band-invalid", ["options", "pointsPerBand"], `pointsPerBand must be a whole number from 1 to 100000; got ${String(perBand)}.`);
-  }
+  const perBand = checkPointsPerBand(found, options?.pointsPerBand);
   found.throwIfAny();
   const source = bandSource(bands);
   const points = profilePoints(shear, source, section.secondMomentZ, Math.max(perBand, 16));

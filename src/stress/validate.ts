@@ -7,7 +7,7 @@ export function checkSecondMoment(found: IssueCollector, value: unknown, path: I
   found.add(
     "second-moment-not-positive",
     path,
-    `The ${what} must be above zero; got ${value}. A section with no bending stiffness about this axis cannot carry a moment: check the section's dimensions.`,
+    `The ${what} must be above zero; got ${value}: check the section's dimensions.`,
     { value },
   );
   return false;
@@ -20,7 +20,7 @@ export function checkFibreInside(found: IssueCollector, y: number, top: number, 
     found.add(
       "fibre-outside-section",
       path,
-      `The fibre at y = ${y} lies outside the section, whose fibres run from y = ${bottom} to y = ${top} about the centroid. Measure y up from the centroid.`,
+      `The fibre at y = ${y} lies outside the section (y from ${bottom} to ${top}, measured up from the centroid).`,
       { y, top, bottom },
     );
   }
@@ -42,7 +42,7 @@ export function checkExtremes(found: IssueCollector, extremes: unknown, path: Is
     found.add(
       "extremes-not-about-centroid",
       path,
-      `The extreme fibres must straddle the centroid (top >= 0 >= bottom); got top = ${t}, bottom = ${b}. Give y coordinates measured up from the centroid.`,
+      `The extreme fibres must straddle the centroid (top >= 0 >= bottom); got top = ${t}, bottom = ${b}.`,
       { top: t, bottom: b },
     );
     return false;

@@ -14,8 +14,6 @@ export interface CatalogUnit {
   readonly aliases: readonly string[];
   /** The unit's name in words. */
   readonly name: string;
-  /** The definition in words, with its source, for documentation. */
-  readonly definition: string;
   /** Its dimension: exponents of length, force and angle. */
   readonly dimension: Dimension;
   /** The SI value of one unit is `numerator / denominator` (both exact decimals). */
@@ -24,7 +22,7 @@ export interface CatalogUnit {
   readonly denominator: Decimal;
 }
 
-type Row = readonly [symbol: string, aliases: readonly string[], name: string, definition: string, dimension: Dimension, numerator: string, denominator?: string];
+type Row = readonly [symbol: string, aliases: readonly string[], name: string, dimension: Dimension, numerator: string, denominator?: string];
 
 const L: Dimension = { length: 1, force: 0, angle: 0 };
 const F: Dimension = { length: 0, force: 1, angle: 0 };
@@ -40,30 +38,31 @@ const KIP = "4448.2216152605";
 const IN2 = "0.00064516"; // 0.0254^2
 const FT2 = "0.09290304"; // 0.3048^2
 
+// Definitions in words, with sources: docs/units.md ("Units" table).
 const ROWS: readonly Row[] = [
-  ["m", ["metre", "meter"], "metre", "SI base unit of length", L, "1"],
-  ["mm", [], "millimetre", "0.001 m", L, "0.001"],
-  ["cm", [], "centimetre", "0.01 m", L, "0.01"],
-  ["km", [], "kilometre", "1000 m", L, "1000"],
-  ["in", ["inch", "inches"], "inch", "0.0254 m exactly (international inch)", L, "0.0254"],
-  ["ft", ["foot", "feet"], "foot", "12 in = 0.3048 m exactly", L, "0.3048"],
-  ["yd", ["yard"], "yard", "3 ft = 0.9144 m exactly", L, "0.9144"],
-  ["N", ["newton"], "newton", "SI unit of force", F, "1"],
-  ["kN", [], "kilonewton", "1000 N", F, "1000"],
-  ["MN", [], "meganewton", "1 000 000 N", F, "1000000"],
-  ["lbf", ["lb", "lbs"], "pound-force", "4.4482216152605 N exactly (0.45359237 kg x 9.80665 m/s^2)", F, LBF],
-  ["kip", ["kips"], "kip (kilopound-force)", "1000 lbf", F, KIP],
-  ["Pa", [], "pascal", "1 N/m^2", P, "1"],
-  ["kPa", [], "kilopascal", "1000 Pa", P, "1000"],
-  ["MPa", [], "megapascal", "1 000 000 Pa = 1 N/mm^2", P, "1000000"],
-  ["GPa", [], "gigapascal", "1 000 000 000 Pa = 1 kN/mm^2", P, "1000000000"],
-  ["psi", [], "pound-force per square inch", "1 lbf/in^2", P, LBF, IN2],
-  ["ksi", [], "kip per square inch", "1 kip/in^2", P, KIP, IN2],
-  ["psf", [], "pound-force per square foot", "1 lbf/ft^2", P, LBF, FT2],
-  ["ksf", [], "kip per square foot", "1 kip/ft^2", P, KIP, FT2],
-  ["plf", [], "pound-force per linear foot", "1 lbf/ft", W, LBF, "0.3048"],
-  ["klf", [], "kip per linear foot", "1 kip/ft", W, KIP, "0.3048"],
-  ["rad", ["radian", "radians"], "radian", "SI unit of plane angle; dimensionless (1 rad = 1)", A, "1"],
+  ["m", ["metre", "meter"], "metre", L, "1"],
+  ["mm", [], "millimetre", L, "0.001"],
+  ["cm", [], "centimetre", L, "0.01"],
+  ["km", [], "kilometre", L, "1000"],
+  ["in", ["inch", "inches"], "inch", L, "0.0254"],
+  ["ft", ["foot", "feet"], "foot", L, "0.3048"],
+  ["yd", ["yard"], "yard", L, "0.9144"],
+  ["N", ["newton"], "newton", F, "1"],
+  ["kN", [], "kilonewton", F, "1000"],
+  ["MN", [], "meganewton", F, "1000000"],
+  ["lbf", ["lb", "lbs"], "pound-force", F, LBF],
+  ["kip", ["kips"], "kip (kilopound-force)", F, KIP],
+  ["Pa", [], "pascal", P, "1"],
+  ["kPa", [], "kilopascal", P, "1000"],
+  ["MPa", [], "megapascal", P, "1000000"],
+  ["GPa", [], "gigapascal", P, "1000000000"],
+  ["psi", [], "pound-force per square inch", P, LBF, IN2],
+  ["ksi", [], "kip per square inch", P, KIP, IN2],
+  ["psf", [], "pound-force per square foot", P, LBF, FT2],
+  ["ksf", [], "kip per square foot", P, KIP, FT2],
+  ["plf", [], "pound-force per linear foot", W, LBF, "0.3048"],
+  ["klf", [], "kip per linear foot", W, KIP, "0.3048"],
+  ["rad", ["radian", "radians"], "radian", A, "1"],
 ];
 
 /**
@@ -76,12 +75,11 @@ const ROWS: readonly Row[] = [
  * ```
  */
 export const unitCatalog: readonly CatalogUnit[] = Object.freeze(
-  ROWS.map(([symbol, aliases, name, definition, dimension, numerator, denominator]) =>
+  ROWS.map(([symbol, aliases, name, dimension, numerator, denominator]) =>
     Object.freeze({
       symbol,
       aliases: Object.freeze([...aliases]),
       name,
-      definition,
       dimension: Object.freeze({ ...dimension }),
       numerator: exact(numerator),
       denominator: exact(denominator ?? "1"),

@@ -3,21 +3,21 @@ import { describeDimension, dimensionOfKind, fitsDimension, isQuantityKind, quan
 import type { UnitFactor } from "./unit.js";
 import { KIND_EXAMPLES, KIND_WORDS } from "./words.js";
 
-/** An issue when `kind` is not a {@link QuantityKind}, else undefined. */
+/** An issue (at `path` + `"kind"`) when `kind` is not a {@link QuantityKind}, else undefined. */
 export function checkKind(kind: unknown, path: IssuePath): FlexuraIssue | undefined {
   if (isQuantityKind(kind)) return undefined;
-  return issue("unknown-quantity-kind", path, `${describeValue(kind)} is not a kind of quantity; use one of ${quantityKinds.join(", ")}.`, {
+  return issue("unknown-quantity-kind", [...path, "kind"], `${describeValue(kind)} is not a kind of quantity; use one of ${quantityKinds.join(", ")}.`, {
     value: describeValue(kind),
   });
 }
 
 /** An issue when `unit` cannot express a quantity of `kind`, else undefined. */
-export function checkFits(unit: UnitFactor, kind: QuantityKind, path: IssuePath, shown: string): FlexuraIssue | undefined {
+export function checkFits(unit: UnitFactor, kind: QuantityKind, path: IssuePath, shown: () => string): FlexuraIssue | undefined {
   if (fitsDimension(unit.dimension, dimensionOfKind(kind))) return undefined;
   const found = unit.kinds[0];
   const is = found === undefined ? `has dimension ${describeDimension(unit.dimension)}` : `is ${KIND_WORDS[found]}`;
   const advice = kind === "dimensionless" ? "give the number alone" : `use a unit such as ${KIND_EXAMPLES[kind]}`;
-  return issue("wrong-dimension", path, `${shown} ${is}, but ${KIND_WORDS[kind]} is due here; ${advice}.`, {
+  return issue("wrong-dimension", path, `${shown()} ${is}, but ${KIND_WORDS[kind]} is due here; ${advice}.`, {
     unit: unit.unit,
     expected: kind,
     found: unit.kinds,

@@ -60,7 +60,7 @@ export function convert(value: number, fromUnit: string, toUnit: string, options
   if (!finite || pair === undefined || found.length > 0) throw new FlexuraError(found);
   const [from, to] = pair;
   if (from.unit === to.unit) return value === 0 ? 0 : value;
-  const out = rescale(value, from, to, [...path, "value"], `${value} ${from.unit}`);
+  const out = rescale(value, from, to, [...path, "value"], () => `${value} ${from.unit}`);
   if (typeof out !== "number") throw new FlexuraError([out]);
   return out;
 }
@@ -87,7 +87,8 @@ export function tryConvert(value: number, fromUnit: string, toUnit: string, opti
  * @param toUnit - Such as `"kN*m"`, of the same dimension.
  * @param options - See {@link ConvertOptions}.
  * @returns The multiplier from `fromUnit` to `toUnit`.
- * @throws FlexuraError `unit-not-a-string`, `unit-empty`, `unit-syntax`, `unknown-unit`, `incompatible-units`.
+ * @throws FlexuraError `unit-not-a-string`, `unit-empty`, `unit-syntax`, `unknown-unit`, `incompatible-units`,
+ *   `number-out-of-range` (a ratio beyond a JavaScript number, possible only with extreme powers).
  * @example
  * ```ts
  * const k = conversionFactor("kip*ft", "kN*m"); // 1.3558179483314003
@@ -99,7 +100,9 @@ export function conversionFactor(fromUnit: string, toUnit: string, options?: Con
   const pair = resolvePair(fromUnit, toUnit, options?.path ?? [], found);
   if (pair === undefined) throw new FlexuraError(found);
   const [from, to] = pair;
-  return from.numerator.times(to.denominator).div(from.denominator.times(to.numerator)).toNumber();
+  const ratio = rescale(1, from, to, options?.path ?? [], () => `1 ${from.unit}`);
+  if (typeof ratio !== "number") throw new FlexuraError([ratio]);
+  return ratio;
 }
 
 /**

@@ -79,7 +79,7 @@ export function formatQuantity(value: number, unit: string, options?: FormatQuan
     }
   }
   if (!finite || Array.isArray(to) || Array.isArray(from) || found.length > 0) throw new FlexuraError(found);
-  const shown = rescale(value, from, to, ["value"], `${value}`);
+  const shown = rescale(value, from, to, ["value"], () => String(value));
   if (typeof shown !== "number") throw new FlexuraError([shown]);
   const text = number(shown, options);
   if (to === undefined) return text;

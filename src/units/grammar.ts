@@ -35,7 +35,8 @@ export type UnitParse = { readonly ok: true; readonly expression: UnitExpression
 
 const PRODUCT = new Set(["*", "·", "⋅", "×", "-"]);
 const SUPERSCRIPT: Readonly<Record<string, number>> = { "⁰": 0, "¹": 1, "²": 2, "³": 3, "⁴": 4, "⁵": 5, "⁶": 6, "⁷": 7, "⁸": 8, "⁹": 9 };
-const MAX_POWER = 12;
+/** The largest power, in absolute value, of any symbol, after powers of groups are multiplied out. */
+export const MAX_POWER = 12;
 const MAX_DEPTH = 8;
 /** Longest unit text read; longer text is refused rather than parsed. */
 export const MAX_UNIT_LENGTH = 120;

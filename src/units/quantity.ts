@@ -1,7 +1,5 @@
-import type { Decimal } from "decimal.js";
 import { attempt, describeValue, FlexuraError, issue, type FlexuraIssue, type IssuePath, type Result } from "../errors/index.js";
 import { checkFits, checkKind } from "./check.js";
-import { ExactDecimal } from "./decimal.js";
 import { dimensionOfKind, fitsDimension, isQuantityKind, type QuantityKind } from "./kinds.js";
 import { readLeadingNumber } from "./number.js";
 import { rescale } from "./scale.js";
@@ -35,13 +33,13 @@ export interface ParseQuantityOptions {
 
 interface Read {
   readonly quantity: Quantity;
-  readonly amount: Decimal;
+  readonly digits: string;
   readonly unit: UnitFactor | undefined;
 }
 
 /** Reads text as a quantity of `kind`; collects every issue found. */
 export function readQuantity(text: unknown, kind: unknown, path: IssuePath, found: FlexuraIssue[]): Read | undefined {
-  const kindIssue = checkKind(kind, [...path, "kind"]);
+  const kindIssue = checkKind(kind, path);
   if (kindIssue) found.push(kindIssue);
   if (typeof text !== "string") {
     found.push(issue("quantity-not-a-string", path, `A quantity must be a string such as "12 kN" or "1.5 kip/ft"; got ${describeValue(text)}.`, { value: describeValue(text) }));
@@ -56,11 +54,9 @@ export function readQuantity(text: unknown, kind: unknown, path: IssuePath, foun
     found.push(issue("number-missing", path, `${JSON.stringify(text)} does not start with a number; write the number first, as in "12 kN".`, { text }));
     return undefined;
   }
-  const amount = new ExactDecimal(number.digits);
-  const asNumber = amount.toNumber();
-  const mantissaIsZero = !/[1-9]/.test(number.digits.split(/[eE]/)[0] ?? "");
-  if (!Number.isFinite(asNumber) || (asNumber === 0 && !mantissaIsZero)) {
-    found.push(issue("number-out-of-range", path, `The number ${number.digits} in ${JSON.stringify(text)} is outside what a JavaScript number can hold (about 1e-308 to 1e308).`, { text }));
+  const asNumber = Number(number.digits);
+  if (!Number.isFinite(asNumber) || (asNumber === 0 && /[1-9]/.test(number.digits.split(/[eE]/)[0] ?? ""))) {
+    found.push(issue("number-out-of-range", path, `The number ${number.digits} in ${JSON.stringify(text)} is outside what a JavaScript number can hold (about 5e-324 to 1.8e308).`, { text }));
     return undefined;
   }
   const unitText = number.rest.trim();
@@ -78,7 +74,7 @@ export function readQuantity(text: unknown, kind: unknown, path: IssuePath, foun
     }
     unit = read;
     if (isQuantityKind(kind)) {
-      const wrong = checkFits(unit, kind, path, JSON.stringify(text));
+      const wrong = checkFits(unit, kind, path, () => JSON.stringify(text));
       if (wrong) {
         found.push(wrong);
         return undefined;
@@ -86,13 +82,13 @@ export function readQuantity(text: unknown, kind: unknown, path: IssuePath, foun
     }
   }
   if (!isQuantityKind(kind)) return undefined;
-  const value = rescale(amount, unit, undefined, path, JSON.stringify(text));
+  const value = rescale(number.digits, unit, undefined, path, () => JSON.stringify(text));
   if (typeof value !== "number") {
     found.push(value);
     return undefined;
   }
   const quantity: Quantity = Object.freeze({ kind, value, amount: asNumber === 0 ? 0 : asNumber, unit: unit?.unit ?? "" });
-  return { quantity, amount, unit };
+  return { quantity, digits: number.digits, unit };
 }
 
 /**
@@ -159,11 +155,11 @@ export function convertQuantity(text: string, kind: QuantityKind, toUnit: string
   const to = resolveUnit(toUnit, [...path, "toUnit"]);
   if (Array.isArray(to)) found.push(...to);
   else if (isQuantityKind(kind)) {
-    const wrong = checkFits(to, kind, [...path, "toUnit"], `The unit ${JSON.stringify(toUnit)}`);
+    const wrong = checkFits(to, kind, [...path, "toUnit"], () => `The unit ${JSON.stringify(toUnit)}`);
     if (wrong) found.push(wrong);
   }
   if (read === undefined || Array.isArray(to) || found.length > 0) throw new FlexuraError(found);
-  const value = rescale(read.amount, read.unit, to, path, JSON.stringify(text));
+  const value = rescale(read.digits, read.unit, to, path, () => JSON.stringify(text));
   if (typeof value !== "number") throw new FlexuraError([value]);
   return value;
 }

@@ -1,14 +1,15 @@
 import type { Decimal } from "decimal.js";
 import { attempt, describeValue, FlexuraError, issue, type FlexuraIssue, type IssuePath, type Result } from "../errors/index.js";
 import { ONE } from "./decimal.js";
-import { parseUnitExpression, printUnitExpression, symbolsOf, type UnitExpression, type UnitTerm } from "./grammar.js";
+import { MAX_POWER, parseUnitExpression, printUnitExpression, symbolsOf, type UnitExpression, type UnitTerm } from "./grammar.js";
 import { kindsOfDimension, type Dimension, type QuantityKind } from "./kinds.js";
 import { suggestUnits } from "./suggest.js";
 
 /**
  * What a unit is worth in SI base units (metre, newton, radian), exactly.
- * One unit equals `numerator / denominator` base units; both are exact decimals composed
- * from the catalogue's exact definitions, and the division is done once, last.
+ * One unit equals `numerator / denominator` base units: two exact decimals composed from the
+ * catalogue's exact definitions (products and powers of terminating decimals, exact within 64
+ * significant digits); the one division is done last.
  */
 export interface UnitFactor {
   /** Tag: always `"unit-factor"`. */
@@ -19,9 +20,9 @@ export interface UnitFactor {
   readonly dimension: Dimension;
   /** The kinds of quantity this unit can express (empty for a dimension flexura has no kind for). */
   readonly kinds: readonly QuantityKind[];
-  /** Numerator of the exact value of one unit in SI base units. */
+  /** Numerator of the exact value of one unit in SI base units (`0.0254` for `in`). */
   readonly numerator: Decimal;
-  /** Denominator of the exact value of one unit in SI base units. */
+  /** Denominator of the exact value of one unit in SI base units (`1` for `in`, `0.00064516` for `psi`). */
   readonly denominator: Decimal;
   /** `numerator / denominator` to 64 significant digits (exact when it terminates within them). */
   readonly factor: Decimal;
@@ -43,6 +44,8 @@ const cache = new Map<string, UnitFactor>();
 interface Accumulated {
   numerator: Decimal;
   denominator: Decimal;
+  /** The first symbol whose powers multiply beyond the limit, as `m^16`. */
+  tooHigh: string | undefined;
   length: number;
   force: number;
   angle: number;
@@ -57,18 +60,40 @@ function accumulate(expression: UnitExpression, power: number, into: Accumulated
     const u = t.unit;
     if (u === undefined) return; // reported by the caller
     const e = p * t.power;
+    if (Math.abs(e) > MAX_POWER) {
+      into.tooHigh ??= `${u.symbol}^${e}`;
+      return;
+    }
     const [up, down] = e >= 0 ? [u.numerator, u.denominator] : [u.denominator, u.numerator];
     const n = Math.abs(e);
-    if (n !== 0) {
-      into.numerator = into.numerator.times(up.pow(n));
-      into.denominator = into.denominator.times(down.pow(n));
-    }
+    into.numerator = into.numerator.times(up.pow(n));
+    into.denominator = into.denominator.times(down.pow(n));
     into.length += e * u.dimension.length;
     into.force += e * u.dimension.force;
     into.angle += e * u.dimension.angle;
   };
   for (const t of expression.numerator) term(t, power);
   if (expression.denominator) term(expression.denominator, -power);
+}
+
+/** Numerator and denominator scaled to integers by one power of ten, as doubles when both are below 2^53 (else Infinity). */
+export interface SmallRatio {
+  readonly num: number;
+  readonly den: number;
+}
+
+const SMALL = new WeakMap<UnitFactor, SmallRatio>();
+
+function smallRatio(numerator: Decimal, denominator: Decimal): SmallRatio {
+  const scale = Math.max(numerator.decimalPlaces(), denominator.decimalPlaces());
+  const num = numerator.times(10 ** scale).toNumber();
+  const den = denominator.times(10 ** scale).toNumber();
+  return num < 2 ** 53 && den < 2 ** 53 && scale <= 22 ? { num, den } : { num: Infinity, den: Infinity };
+}
+
+/** The unit's value as a ratio of two integers below 2^53, when it is one (internal fast path). */
+export function smallRatioOf(unit: UnitFactor): SmallRatio {
+  return SMALL.get(unit) ?? smallRatio(unit.numerator, unit.denominator);
 }
 
 /**
@@ -93,20 +118,28 @@ export function readUnit(text: string, path: IssuePath): FlexuraIssue[] | UnitFa
       });
     });
   }
-  const acc: Accumulated = { numerator: ONE, denominator: ONE, length: 0, force: 0, angle: 0 };
+  const acc: Accumulated = { numerator: ONE, denominator: ONE, tooHigh: undefined, length: 0, force: 0, angle: 0 };
   accumulate(parsed.expression, 1, acc);
+  if (acc.tooHigh !== undefined) {
+    const message = `The unit ${JSON.stringify(text)} cannot be read: its powers multiply to ${acc.tooHigh}, beyond the limit of ${MAX_POWER}.`;
+    return [issue("unit-syntax", path, message, { unit: text, at: 0 })];
+  }
   const dimension: Dimension = Object.freeze({ length: acc.length, force: acc.force, angle: acc.angle });
-  const factor = Object.freeze(acc.numerator.div(acc.denominator));
-  return Object.freeze({
+  const numerator = Object.freeze(acc.numerator);
+  const denominator = Object.freeze(acc.denominator);
+  const factor = Object.freeze(numerator.div(denominator));
+  const result: UnitFactor = Object.freeze({
     kind: "unit-factor",
     unit: printUnitExpression(parsed.expression),
     dimension,
     kinds: kindsOfDimension(dimension),
-    numerator: Object.freeze(acc.numerator),
-    denominator: Object.freeze(acc.denominator),
+    numerator,
+    denominator,
     factor,
     scale: factor.toNumber(),
   });
+  SMALL.set(result, smallRatio(numerator, denominator));
+  return result;
 }
 
 /**

@@ -29,6 +29,9 @@ describe("niceTicks", () => {
     expect(niceTicks(-30, 30, 6)).toEqual([-30, -20, -10, 0, 10, 20, 30]);
     expect(niceTicks(0, 0.35, 4)).toEqual([0, 0.1, 0.2, 0.3]);
     expect(niceTicks(3, 3)).toEqual([3]);
+    // A counterexample found by fast-check: the step must not round up past the interval.
+    expect(niceTicks(5e-11, 0.04000000005, 2)).toEqual([0.02, 0.04]);
+    expect(niceTicks(0.0051, 0.0093, 2)).toEqual([0.0051]);
   });
   test.prop([fc.double({ min: -1e5, max: 1e5, noNaN: true }), fc.double({ min: 1e-2, max: 1e5, noNaN: true }), fc.integer({ min: 2, max: 10 })])(
     "niceTicks lie inside the interval, in increasing order, and are not too many",

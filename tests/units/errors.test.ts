@@ -131,7 +131,7 @@ describe("bad input gives typed errors", () => {
       [
         {
           "code": "number-out-of-range",
-          "message": "The number 1e400 in "1e400 psi" is outside what a JavaScript number can hold (about 1e-308 to 1e308).",
+          "message": "The number 1e400 in "1e400 psi" is outside what a JavaScript number can hold (about 5e-324 to 1.8e308).",
           "path": [],
           "text": "1e400 psi",
         },
@@ -141,7 +141,7 @@ describe("bad input gives typed errors", () => {
       [
         {
           "code": "number-out-of-range",
-          "message": "The number 1e-400 in "1e-400 m" is outside what a JavaScript number can hold (about 1e-308 to 1e308).",
+          "message": "The number 1e-400 in "1e-400 m" is outside what a JavaScript number can hold (about 5e-324 to 1.8e308).",
           "path": [],
           "text": "1e-400 m",
         },
@@ -151,9 +151,9 @@ describe("bad input gives typed errors", () => {
       [
         {
           "code": "number-out-of-range",
-          "message": ""1e300 GPa" is 1e+309 in SI base units, which a JavaScript number cannot hold (about 1e-308 to 1e308).",
+          "message": ""1e300 GPa" is too large to hold as a JavaScript number in SI base units (magnitudes from about 5e-324 to 1.8e308).",
           "path": [],
-          "value": "1e+309",
+          "size": "too large",
         },
       ]
     `);
@@ -653,9 +653,9 @@ describe("bad input gives typed errors", () => {
       [
         {
           "code": "number-out-of-range",
-          "message": ""1e303 km" is 1e+309 in mm, which a JavaScript number cannot hold (about 1e-308 to 1e308).",
+          "message": ""1e303 km" is too large to hold as a JavaScript number in mm (magnitudes from about 5e-324 to 1.8e308).",
           "path": [],
-          "value": "1e+309",
+          "size": "too large",
         },
       ]
     `);

@@ -1,0 +1,15 @@
+export type { CheckKind, CheckLocation, CheckResult } from "./types.js";
+export { checkResult } from "./types.js";
+export type { DeflectionLimit, RatioDeflectionLimit, AbsoluteDeflectionLimit, AllowableBendingStress, TensionCompressionAllowables, MemberLimits } from "./limits.js";
+export { commonDeflectionRatios } from "./limits.js";
+export type { MemberSection, SectionStretch, MemberSections } from "./sections.js";
+export { memberSection } from "./sections.js";
+export type { CheckedSolution } from "./solution.js";
+export type { PeakBendingStress, PeakShearStress, MemberStresses } from "./peaks.js";
+export { memberStresses, tryMemberStresses } from "./peaks.js";
+export type { SpanDeflection } from "./deflection.js";
+export { spanDeflections } from "./deflection.js";
+export type { MemberCheck } from "./member.js";
+export { checkMember, tryCheckMember } from "./member.js";
+export type { SingleCheckOptions, DeflectionCheckOptions } from "./single.js";
+export { checkBendingStress, tryCheckBendingStress, checkShearStress, tryCheckShearStress, checkDeflection, tryCheckDeflection } from "./single.js";

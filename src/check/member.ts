@@ -1,0 +1,102 @@
+import { IssueCollector, attempt, type Result } from "../errors/index.js";
+import { spanDeflections, type SpanDeflection } from "./deflection.js";
+import { bendingAllowables, checkLimits, deflectionLimits, type DeflectionLimit, type MemberLimits } from "./limits.js";
+import { stressesOf, type MemberStresses, type PeakBendingStress } from "./peaks.js";
+import { resolveSections, type MemberSections } from "./sections.js";
+import type { CheckedSolution } from "./solution.js";
+import { deflectionResult } from "./single.js";
+import { checkResult, type CheckResult } from "./types.js";
+
+/** Everything checked on a member, and the governing check. */
+export interface MemberCheck {
+  /** Tag. */
+  readonly kind: "member-check";
+  /** Every check run: bending tension and compression, shear stress, and one deflection check per limit and span. */
+  readonly checks: readonly CheckResult[];
+  /** The check with the highest utilisation (the first on ties); null when no limit was given. */
+  readonly governing: CheckResult | null;
+  /** True when every check passes. */
+  readonly pass: boolean;
+  /** The peak stresses along the member. */
+  readonly stresses: MemberStresses;
+  /** The peak deflection of every span and cantilever. */
+  readonly deflections: readonly SpanDeflection[];
+}
+
+function bendingFormula(p: PeakBendingStress, sense: "t" | "c"): string {
+  const which = p.moment >= 0 ? "sagging" : "hogging";
+  return `sigma_${sense} = |M y_${p.fibre} / I_z|, ${which}`;
+}
+
+function deflectionCheck(limit: DeflectionLimit, d: SpanDeflection, index: number): CheckResult {
+  const label = `deflection, ${d.spanKind} ${d.span + 1} (x = ${d.from} to ${d.to}), limit ${index + 1}`;
+  return deflectionResult(limit, Math.abs(d.deflection), d.to - d.from, d.spanKind === "cantilever", { x: d.at, span: d.span }, label);
+}
+
+/**
+ * Checks a solved member against the limits the engineer supplies: bending stress (tension
+ * and compression, anywhere on the member, see `memberStresses`), shear stress, and deflection
+ * per span and cantilever (span / n, or an absolute limit; see {@link commonDeflectionRatios}).
+ * Each check reports demand, capacity, utilisation = demand / capacity, pass (utilisation <= 1),
+ * where it governs and the formula used; the governing check is the one with the highest
+ * utilisation. No design-code capacity formulas: the allowable values are the user's.
+ *
+ * @param solution - A solved member (`solveBeam`'s result), in the same consistent units as the sections and limits.
+ * @param sections - One section, or stretches of constant section tiling the member.
+ * @param limits - Allowable stresses and deflection limits; a missing one is not checked.
+ * @returns Every check, the governing one and the peaks.
+ * @throws FlexuraError `allowable-not-positive`, `unknown-limit-kind`, `shear-section-missing` (a shear
+ *   limit but no bands on some stretch), the codes of `memberStresses`, `not-a-number` / `not-finite`.
+ * @example
+ * ```ts
+ * const r = checkMember(solution, { properties: { secondMomentZ: 3.4e8, extremes: { top: 200, bottom: -200 } } },
+ *   { bendingStress: 165, deflection: { kind: "ratio", ratio: commonDeflectionRatios.floorLive } });
+ * r.governing?.label; r.pass;
+ * ```
+ */
+export function checkMember(solution: CheckedSolution, sections: MemberSections, limits: MemberLimits): MemberCheck {
+  const found = new IssueCollector();
+  const stretches = resolveSections(found, sections, solution.length, ["sections"]);
+  checkLimits(found, limits, ["limits"]);
+  if (limits.shearStress !== undefined && found.empty) {
+    stretches.forEach((s, i) => {
+      if (s.unitShear === null) {
+        const path = Array.isArray(sections) ? ["sections", i, "shear"] : ["sections", "shear"];
+        found.add("shear-section-missing", path, "A shear-stress limit was given, so describe the section for shear: give its depth bands in `shear`.");
+      }
+    });
+  }
+  found.throwIfAny();
+  const stresses = stressesOf(solution, stretches);
+  const deflections = spanDeflections(solution);
+  const checks: CheckResult[] = [];
+  const allow = bendingAllowables(limits);
+  if (allow !== null) {
+    const t = stresses.tension;
+    const c = stresses.compression;
+    checks.push(checkResult("bending-tension", "bending stress, tension", t.stress, allow.tension, { x: t.x, fibre: t.fibre, y: t.y, stretch: t.stretch }, bendingFormula(t, "t")));
+    checks.push(checkResult("bending-compression", "bending stress, compression", -c.stress + 0, allow.compression, { x: c.x, fibre: c.fibre, y: c.y, stretch: c.stretch }, bendingFormula(c, "c")));
+  }
+  if (limits.shearStress !== undefined && stresses.shear !== null) {
+    const v = stresses.shear;
+    checks.push(checkResult("shear-stress", "shear stress", v.stress, limits.shearStress, { x: v.x, y: v.y, stretch: v.stretch }, "tau = |V| Q / (I_z b)"));
+  }
+  deflectionLimits(limits).forEach((limit, i) => {
+    for (const d of deflections) checks.push(deflectionCheck(limit, d, i));
+  });
+  let governing: CheckResult | null = null;
+  for (const c of checks) if (governing === null || c.utilisation > governing.utilisation) governing = c;
+  return { kind: "member-check", checks, governing, pass: checks.every((c) => c.pass), stresses, deflections };
+}
+
+/**
+ * Non-throwing form of {@link checkMember}.
+ *
+ * @example
+ * ```ts
+ * tryCheckMember(solution, section, { bendingStress: -1 }).ok; // false (allowable-not-positive)
+ * ```
+ */
+export function tryCheckMember(solution: CheckedSolution, sections: MemberSections, limits: MemberLimits): Result<MemberCheck> {
+  return attempt(() => checkMember(solution, sections, limits));
+}
