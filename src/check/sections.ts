@@ -77,7 +77,7 @@ export function resolveSections(found: IssueCollector, sections: MemberSections,
         found.add(
           "stretches-not-tiling",
           p,
-          `Section stretches must run in order from x = 0 to x = ${length} without gaps or overlaps; stretch ${i} runs from ${s.from} to ${s.to}.`,
+          `Stretches must tile x = 0 to ${length} in order; stretch ${i} runs from ${s.from} to ${s.to}.`,
           { from: s.from, to: s.to, length },
         );
       }

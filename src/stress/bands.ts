@@ -1,5 +1,5 @@
 import { IssueCollector, attempt, requireFinite, type IssuePath, type Result } from "../errors/index.js";
-import { checkModularRatio } from "./validate.js";
+import { checkModularRatio, checkOrder } from "./validate.js";
 
 /**
  * A horizontal band of a section whose width varies linearly with height: a rectangle, a
@@ -65,12 +65,7 @@ export function checkBands(found: IssueCollector, bands: readonly DepthBand[], p
       case "trapezoid": {
         const b = requireFinite(found, band.yBottom, [...p, "yBottom"], "band's bottom y");
         const t = requireFinite(found, band.yTop, [...p, "yTop"], "band's top y");
-        if (b && t && band.yBottom > band.yTop) {
-          found.add("layer-upside-down", p, `The band's bottom (y = ${band.yBottom}) lies above its top (y = ${band.yTop}); swap them.`, {
-            yBottom: band.yBottom,
-            yTop: band.yTop,
-          });
-        }
+        if (b && t) checkOrder(found, band.yBottom, band.yTop, p);
         for (const key of ["widthBottom", "widthTop"] as const) {
           if (requireFinite(found, band[key], [...p, key], "band width") && band[key] < 0) {
             found.add("width-negative", [...p, key], `A band's width cannot be negative; got ${band[key]}. Mark a hole with hole: true.`, { value: band[key] });

@@ -1,7 +1,7 @@
 import { IssueCollector, attempt, requireFinite, type Result } from "../errors/index.js";
 import { stressAt } from "./flexure.js";
 import type { BendingPropertiesWithExtremes } from "./types.js";
-import { checkExtremes, checkFibreInside, checkModularRatio, checkSecondMoment } from "./validate.js";
+import { checkExtremes, checkFibreInside, checkModularRatio, checkOrder, checkSecondMoment } from "./validate.js";
 
 /** A band of one material over part of the depth, for a stress profile. */
 export interface StressLayer {
@@ -80,12 +80,7 @@ export function bendingStressProfile(
     const b = requireFinite(found, layer.yBottom, [...path, "yBottom"], "band's bottom y");
     const t = requireFinite(found, layer.yTop, [...path, "yTop"], "band's top y");
     if (layer.modularRatio !== undefined) checkModularRatio(found, layer.modularRatio, [...path, "modularRatio"]);
-    if (b && t && layer.yBottom > layer.yTop) {
-      found.add("layer-upside-down", path, `The band's bottom (y = ${layer.yBottom}) lies above its top (y = ${layer.yTop}); swap them.`, {
-        yBottom: layer.yBottom,
-        yTop: layer.yTop,
-      });
-    }
+    if (b && t) checkOrder(found, layer.yBottom, layer.yTop, path);
     if (extremesOk && b) checkFibreInside(found, layer.yBottom, section.extremes.top, section.extremes.bottom, [...path, "yBottom"]);
     if (extremesOk && t) checkFibreInside(found, layer.yTop, section.extremes.top, section.extremes.bottom, [...path, "yTop"]);
   });

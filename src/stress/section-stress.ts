@@ -5,6 +5,7 @@ import { cornerStresses, type CornerStresses } from "./corners.js";
 import { checkPointsPerBand, findPeak, pointAt, profilePoints, type CutSource } from "./shear-peak.js";
 import type { ShearStressPoint, ShearStressProfile } from "./shear-profile.js";
 import { candidatePoints, sectionLevels } from "./section-points.js";
+import { checkFibreInside } from "./validate.js";
 
 /** Options of the functions that take a section from the section module. */
 export interface SectionStressOptions extends SectionPropertiesOptions {
@@ -46,13 +47,7 @@ export function sectionShearStressAt(shear: number, section: Section, y: number,
   const props = sectionProperties(section, options);
   const found = new IssueCollector();
   requireFinite(found, shear, ["shear"], "shear force");
-  if (requireFinite(found, y, ["y"], "cut height y") && (y > props.extremes.top || y < props.extremes.bottom)) {
-    found.add("fibre-outside-section", ["y"], `The cut at y = ${y} lies outside the section (y from ${props.extremes.bottom} to ${props.extremes.top} about the centroid).`, {
-      y,
-      top: props.extremes.top,
-      bottom: props.extremes.bottom,
-    });
-  }
+  if (requireFinite(found, y, ["y"], "cut height y")) checkFibreInside(found, y, props.extremes.top, props.extremes.bottom, ["y"]);
   found.throwIfAny();
   const source = cutSource(section, props, options);
   return pointAt(shear, source, props.secondMomentZ, y, Math.min(source.width(y, "above"), source.width(y, "below")));

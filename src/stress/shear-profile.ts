@@ -2,7 +2,7 @@ import { IssueCollector, attempt, requireFinite, type Result } from "../errors/i
 import { bandLevels, checkBands, firstMomentAbove, widthAt, type DepthBand } from "./bands.js";
 import type { ShearProperties } from "./shear.js";
 import { checkPointsPerBand, findPeak, pointAt, profilePoints, type CutSource } from "./shear-peak.js";
-import { checkSecondMoment } from "./validate.js";
+import { checkFibreInside, checkSecondMoment } from "./validate.js";
 
 /** The shear stress at one height of a section. */
 export interface ShearStressPoint {
@@ -59,7 +59,7 @@ function validate(shear: number, bands: readonly DepthBand[], section: ShearProp
     found.add(
       "bands-not-about-centroid",
       ["bands"],
-      `The bands' centroid lies at y = ${moment / total}, not at 0: measure every band's y up from the section's (transformed) centroid.`,
+      `The bands' centroid lies at y = ${moment / total}, not 0: measure y from the centroid.`,
       { centroidY: moment / total },
     );
   }
@@ -91,9 +91,7 @@ export function shearStressAt(shear: number, y: number, bands: readonly DepthBan
   const levels = bandLevels(bands);
   const bottom = levels[0] ?? 0;
   const top = levels[levels.length - 1] ?? 0;
-  if (y < bottom || y > top) {
-    found.add("fibre-outside-section", ["y"], `The cut at y = ${y} lies outside the section (y from ${bottom} to ${top} about the centroid).`, { y, top, bottom });
-  }
+  checkFibreInside(found, y, top, bottom, ["y"]);
   const width = Math.min(widthAt(bands, y, "above"), widthAt(bands, y, "below"));
   if (y > bottom && y < top && !(width > 0)) {
     found.add("width-not-positive", ["y"], `There is no material at y = ${y} (a gap between parts): cut through the section.`, { y });

@@ -33,7 +33,7 @@ export function shearStress(shear: number, cut: BandCut, section: ShearPropertie
   requireFinite(found, shear, ["shear"], "shear force");
   requireFinite(found, cut.firstMoment, ["cut", "firstMoment"], "first moment Q");
   if (requireFinite(found, cut.width, ["cut", "width"], "width at the cut") && !(cut.width > 0)) {
-    found.add("width-not-positive", ["cut", "width"], `The width of material at the cut must be above zero; got ${cut.width}. Cut through the section, not through a gap.`, {
+    found.add("width-not-positive", ["cut", "width"], `The width at the cut must be above zero; got ${cut.width}.`, {
       value: cut.width,
     });
   }

@@ -29,7 +29,7 @@ export function checkFibreInside(found: IssueCollector, y: number, top: number, 
 /** Checks an extremes object: finite numbers with top >= 0 >= bottom. */
 export function checkExtremes(found: IssueCollector, extremes: unknown, path: IssuePath): extremes is { top: number; bottom: number } {
   if (typeof extremes !== "object" || extremes === null) {
-    found.add("extremes-missing", path, "The section's extreme fibres { top, bottom } are needed here: give their y coordinates about the centroid.");
+    found.add("extremes-missing", path, "Give the extreme fibres { top, bottom } about the centroid.");
     return false;
   }
   const e = extremes as Record<string, unknown>;
@@ -56,4 +56,9 @@ export function checkModularRatio(found: IssueCollector, value: unknown, path: I
   if (value > 0) return true;
   found.add("modular-ratio-not-positive", path, `The modular ratio (E of the material / E of the reference) must be above zero; got ${value}.`, { value });
   return false;
+}
+
+/** Records `layer-upside-down` when a band's bottom lies above its top. */
+export function checkOrder(found: IssueCollector, yBottom: number, yTop: number, path: IssuePath): void {
+  if (yBottom > yTop) found.add("layer-upside-down", path, `The band's bottom (y = ${yBottom}) lies above its top (y = ${yTop}).`, { yBottom, yTop });
 }
