@@ -27,21 +27,10 @@ export interface Scratch {
 }
 
 function fresh(): Scratch {
-  return {
-    raw: new Float64Array(0),
-    ei: new Float64Array(0),
-    wLeft: new Float64Array(0),
-    wRight: new Float64Array(0),
-    released: new Uint8Array(0),
-    force: new Float64Array(0),
-    couple: new Float64Array(0),
-    supportNode: new Int32Array(0),
-    band: new Float64Array(0),
-    rhs: new Float64Array(0),
-    prescribed: new Uint8Array(0),
-    value: new Float64Array(0),
-    endForces: new Float64Array(0),
-  };
+  // empty to start with: each array is replaced by a long enough one on first use
+  const f = new Float64Array(0);
+  const u = new Uint8Array(0);
+  return { raw: f, ei: f, wLeft: f, wRight: f, released: u, force: f, couple: f, supportNode: new Int32Array(0), band: f, rhs: f, prescribed: u, value: f, endForces: f };
 }
 
 const shared = fresh();

@@ -9,7 +9,7 @@ export const SAME_POINT = 1e-10;
 function validateStiffness(stiffness: unknown, length: number, found: IssueCollector): void {
   if (typeof stiffness === "number" || !Array.isArray(stiffness)) {
     if ((Number.isFinite(stiffness) || requireFinite(found, stiffness, ["stiffness"], "bending stiffness E I")) && !((stiffness as number) > 0))
-      found.add("stiffness-not-positive", ["stiffness"], `The bending stiffness E I must be positive; got ${stiffness}.`, { value: stiffness });
+      found.add("stiffness-not-positive", ["stiffness"], `The bending stiffness E I must be positive; got ${stiffness as number}.`, { value: stiffness });
     return;
   }
   if (stiffness.length === 0) {
