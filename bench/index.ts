@@ -10,6 +10,7 @@ import "./beam.bench.js";
 import "./stress.bench.js";
 import "./check.bench.js";
 import "./section.bench.js";
+import "./model.bench.js";
 
 const pattern = process.argv[2];
 await runAll(pattern ? new RegExp(pattern) : undefined);

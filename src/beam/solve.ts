@@ -4,7 +4,7 @@ import { extremesOf, type Extremes, type PiecewisePolynomial } from "../math/ind
 import { buildModel } from "./model.js";
 import { recoverDiagrams, recoverReactions, type Diagrams } from "./recover.js";
 import { acquireScratch, releaseScratch } from "./scratch.js";
-import { conditioningWarnings, contraflexurePoints, spansOf } from "./results.js";
+import { balanceWarnings, conditioningWarnings, contraflexurePoints, spansOf } from "./results.js";
 import { checkStability } from "./stability.js";
 import { solveStiffness } from "./stiffness.js";
 import type { BeamInput, BeamPeaks, BeamResidual, BeamSolution, BeamSpan, BeamWarning, Reaction, SolveOptions } from "./types.js";
@@ -59,7 +59,7 @@ export function solveBeam(beam: BeamInput, options?: SolveOptions): BeamSolution
       force += r.force;
       moment += r.force * r.at + r.moment;
     }
-    const warnings = conditioningWarnings(model, beam.supports, result.pivotRatio);
+    const warnings = [...conditioningWarnings(model, beam.supports, result.pivotRatio), ...balanceWarnings(model, result, beam.supports)];
     return solution(beam.length, Object.freeze(reactions), diagrams, Object.freeze({ force, moment }), Object.freeze(warnings), Object.freeze(spansOf(beam.length, beam.supports)));
   } finally {
     releaseScratch(scratch);

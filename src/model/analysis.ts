@@ -1,3 +1,5 @@
+import type { BeamSolution } from "../beam/index.js";
+import type { Section } from "../section/index.js";
 import type { Model, ModelUnits } from "./model.js";
 
 /**
@@ -185,4 +187,16 @@ export interface ModelAnalysis {
   readonly diagrams: ModelDiagrams;
   /** Cautions about the model or its results. */
   readonly warnings: readonly ModelWarning[];
+  /**
+   * The solver's own result, in SI base units (m, N, N*m, rad): `value / scale[kind]` gives model
+   * units. Not part of the JSON form. Always set by `analyzeModel`; optional so that an analysis
+   * built by hand (say, to test a report) need not carry one.
+   */
+  readonly solution?: BeamSolution;
+  /**
+   * The cross-section as built, in metres (y up, z horizontal), for drawing; present when the
+   * model has a section. Divide coordinates by `scale.sectionLength` for the model's units. Not
+   * part of the JSON form.
+   */
+  readonly sectionGeometry?: Section;
 }

@@ -29,3 +29,13 @@ export type {
   ModelWarning,
   ModelScale,
 } from "./analysis.js";
+export type { ModelFile, ModelFileSection, ModelFileUnits, ModelFileSupport, ModelFileLoad, ModelQuantity } from "./file.js";
+export type { ModelJsonSchema } from "./schema.js";
+export { modelSchema, MODEL_SCHEMA_ID } from "./schema.js";
+export { parseModel, tryParseModel } from "./parse.js";
+export { modelToJson } from "./to-json.js";
+export { DEFAULT_MODEL_UNITS } from "./units.js";
+export { analyzeModel, tryAnalyzeModel } from "./analyze.js";
+export { evaluateDiagram } from "./diagrams.js";
+export type { ModelAnalysisJson } from "./analysis-json.js";
+export { analysisToJson } from "./analysis-json.js";

@@ -1,0 +1,135 @@
+import { solveBeam, type BeamSolution } from "../beam/index.js";
+import { attempt, FlexuraError, isFlexuraError, type FlexuraIssue, type Result } from "../errors/index.js";
+import { extremeBendingStresses, peakShearStress } from "../stress/index.js";
+import type { ModelAnalysis, ModelScale, ModelStress, ModelWarning } from "./analysis.js";
+import { beamInputInSI } from "./beam-input.js";
+import { deflectionChecks, stressChecks } from "./checks.js";
+import { diagramsOf, peaksInModelUnits } from "./diagrams.js";
+import type { Model } from "./model.js";
+import { sectionInSI, sectionResult, type SectionInSI } from "./model-section.js";
+import { withoutNegativeZero } from "./plain.js";
+import { scaleOfUnits } from "./units.js";
+
+function fullScale(model: Model): ModelScale {
+  const found: FlexuraIssue[] = [];
+  const scale = scaleOfUnits(model.units, found);
+  if (found.length > 0) throw new FlexuraError(found);
+  return scale as ModelScale;
+}
+
+/** Beam issues point at the solver's input; point them at the model's fields instead. */
+function toModelPath(i: FlexuraIssue, model: Model): FlexuraIssue {
+  const [head, ...rest] = i.path;
+  if (head === "stiffness") return { ...i, path: model.segments === undefined ? (model.I === undefined ? ["section"] : ["I"]) : ["segments", ...rest] };
+  if (head === "length") return { ...i, path: ["length"] };
+  return i;
+}
+
+function solve(model: Model, scale: ModelScale, section: SectionInSI | undefined): BeamSolution {
+  const input = beamInputInSI(model, scale, section?.properties.secondMomentZ);
+  if (input === undefined) {
+    throw new FlexuraError([{ code: "stiffness-missing", path: ["I"], message: 'Give the member\'s stiffness: "E" and "I", or "segments", or a "section" with a "material".' }]);
+  }
+  try {
+    return solveBeam(input);
+  } catch (e) {
+    if (!isFlexuraError(e)) throw e;
+    throw new FlexuraError(e.issues.map((i) => toModelPath(i, model)));
+  }
+}
+
+function stressOf(solution: BeamSolution, section: SectionInSI, scale: ModelScale): ModelStress {
+  const p = section.properties;
+  const props = { secondMomentZ: p.secondMomentZ, extremes: { top: p.extremes.top, bottom: p.extremes.bottom } };
+  // The extreme stresses occur at an extreme fibre under the largest sagging or hogging moment.
+  const peaks = solution.peaks.moment;
+  const atMax = extremeBendingStresses(peaks.max.value, props);
+  const atMin = extremeBendingStresses(peaks.min.value, props);
+  const tension = atMax.tension.stress >= atMin.tension.stress ? { s: atMax.tension, at: peaks.max.at } : { s: atMin.tension, at: peaks.min.at };
+  const compression = atMax.compression.stress <= atMin.compression.stress ? { s: atMax.compression, at: peaks.max.at } : { s: atMin.compression, at: peaks.min.at };
+  const shearPeaks = solution.peaks.shear;
+  const V = shearPeaks.max.value >= -shearPeaks.min.value ? shearPeaks.max : shearPeaks.min;
+  const tau = section.bands.length > 0 && V.value !== 0 ? peakShearStress(V.value, section.bands, { secondMomentZ: p.secondMomentZ }) : undefined;
+  const y = (v: number): number => v / scale.sectionLength;
+  return {
+    tension: { value: tension.s.stress / scale.stress, at: tension.at / scale.length, y: y(tension.s.y) },
+    compression: { value: compression.s.stress / scale.stress, at: compression.at / scale.length, y: y(compression.s.y) },
+    ...(tau === undefined ? {} : { shear: { value: tau.stress / scale.stress, at: V.at / scale.length } }),
+  };
+}
+
+/**
+ * Analyses a model: converts it to SI, solves the member, and when the model has a section,
+ * computes its properties and the extreme bending and shear stresses; checks the member against
+ * the model's limits. Every load acts with factor 1 (load cases are kept on the loads but not
+ * combined). Results are in the model's own units, named in `units`.
+ *
+ * Sign conventions: reactions positive upward and counterclockwise; moment positive sagging;
+ * shear V = dM/dx; slope positive counterclockwise; deflection positive upward; stress positive
+ * in tension, sigma = -M y / I_z (y up from the centroid); shear stress tau = V Q / (I b) at the
+ * height where it peaks.
+ *
+ * @param model - A model from {@link parseModel}. It is not changed.
+ * @returns Reactions, peaks, diagrams, section properties, stresses and checks.
+ * @throws FlexuraError the solver's codes (`mechanism`, `support-duplicate`, `stiffness-not-tiling`,
+ *   ...; see docs/errors.md) with paths into the model; the section builders' codes under `section`;
+ *   unit codes under `units` for a hand-made model with bad units; `stiffness-missing`.
+ * @example
+ * ```ts
+ * const analysis = analyzeModel(parseModel({
+ *   length: 6, E: "200 GPa", I: "8.5e7 mm^4",
+ *   supports: [{ at: 0, type: "pin" }, { at: 6, type: "roller" }],
+ *   loads: [{ type: "distributed", start: 12 }],
+ * }));
+ * analysis.moment.max; // { value: 54, at: 3 } (kN*m, m): w L^2 / 8
+ * ```
+ */
+export function analyzeModel(model: Model): ModelAnalysis {
+  const scale = fullScale(model);
+  const section = model.section === undefined ? undefined : sectionInSI(model.section, scale);
+  const solution = solve(model, scale, section);
+  const warnings: ModelWarning[] = solution.warnings.map((w) => ({ code: w.code, message: w.message }));
+  const stress = section === undefined ? undefined : stressOf(solution, section, scale);
+  const checks = [...deflectionChecks(model, solution, scale), ...stressChecks(model, stress, warnings)];
+  const peaks = solution.peaks;
+  const results = withoutNegativeZero({
+    reactions: solution.reactions.map((r) => ({
+      support: r.support,
+      kind: model.supports[r.support]?.kind ?? "pin",
+      at: r.at / scale.length,
+      force: r.force / scale.force,
+      moment: r.moment / scale.moment,
+    })),
+    shear: peaksInModelUnits(peaks.shear, scale.length, scale.force),
+    moment: peaksInModelUnits(peaks.moment, scale.length, scale.moment),
+    slope: peaksInModelUnits(peaks.slope, scale.length, scale.rotation),
+    deflection: peaksInModelUnits(peaks.deflection, scale.length, scale.deflection),
+    ...(section === undefined || model.section === undefined ? {} : { section: sectionResult(model.section.shape, section.properties, scale) }),
+    ...(stress === undefined ? {} : { stress }),
+    checks,
+    pass: checks.every((c) => c.pass),
+    diagrams: diagramsOf(solution, scale, model.units),
+    warnings,
+  });
+  return {
+    model,
+    units: model.units,
+    scale,
+    ...results,
+    solution,
+    ...(section === undefined ? {} : { sectionGeometry: section.geometry }),
+  };
+}
+
+/**
+ * The non-throwing form of {@link analyzeModel}.
+ *
+ * @example
+ * ```ts
+ * const r = tryAnalyzeModel(model);
+ * if (!r.ok) console.log(r.error.issues.map((i) => i.message));
+ * ```
+ */
+export function tryAnalyzeModel(model: Model): Result<ModelAnalysis> {
+  return attempt(() => analyzeModel(model));
+}
