@@ -22,10 +22,12 @@ export interface Diagrams {
  */
 export function recoverDiagrams(model: BeamModel, result: StiffnessResult): Diagrams {
   const elements = model.nodes - 1;
-  const shear = new Float64Array(elements * 3);
-  const moment = new Float64Array(elements * 4);
-  const slope = new Float64Array(elements * 5);
-  const deflection = new Float64Array(elements * 6);
+  // one allocation for all four (made by buildModel), after the breakpoints
+  let at = model.nodes;
+  const shear = model.output.subarray(at, (at += elements * 3));
+  const moment = model.output.subarray(at, (at += elements * 4));
+  const slope = model.output.subarray(at, (at += elements * 5));
+  const deflection = model.output.subarray(at, at + elements * 6);
   const d = result.displacements;
   const q = result.endForces;
   for (let e = 0; e < elements; e++) {

@@ -1,4 +1,5 @@
-import { evaluatePolynomial, polynomialRootsIn, type PiecewisePolynomial } from "../math/index.js";
+import { evaluatePolynomial, type PiecewisePolynomial } from "../math/index.js";
+import { clearOfZero, rootsToScratch, scratchRoots } from "../math/polynomial.js";
 import { restrainsDeflection, type Support } from "../supports/index.js";
 import type { BeamModel } from "./model.js";
 import type { StiffnessResult } from "./stiffness.js";
@@ -19,17 +20,15 @@ export function contraflexurePoints(moment: PiecewisePolynomial, scale: number):
   const zero = 1e-10 * scale;
   const gap = 1e-8 * ((b[b.length - 1] as number) - (b[0] as number));
   const out: number[] = [];
-  const roots: number[] = [];
   let lastSign = 0;
   let lastEnd = 0;
   for (let i = 0; i + 1 < b.length; i++) {
     const x0 = b[i] as number;
     const h = (b[i + 1] as number) - x0;
-    roots.length = 0;
-    polynomialRootsIn(c, i * stride, d, 0, h, roots);
+    const count = clearOfZero(c, i * stride, d, h) ? 0 : rootsToScratch(c, i * stride, d, 0, h);
     let start = 0;
-    for (let r = 0; r <= roots.length; r++) {
-      const end = r < roots.length ? (roots[r] as number) : h;
+    for (let r = 0; r <= count; r++) {
+      const end = r < count ? (scratchRoots[r] as number) : h;
       if (end > start) {
         const v = evaluatePolynomial(c, i * stride, d, 0.5 * (start + end));
         const sign = v > zero ? 1 : v < -zero ? -1 : 0;
@@ -48,10 +47,15 @@ export function contraflexurePoints(moment: PiecewisePolynomial, scale: number):
 
 /** The spans between supports that hold deflection, and the cantilevers beyond the outermost ones. */
 export function spansOf(length: number, supports: readonly Support[]): BeamSpan[] {
-  const at = supports
-    .filter(restrainsDeflection)
-    .map((s) => s.at)
-    .sort((a, b) => a - b);
+  // positions of the supports that hold deflection, sorted (they usually come so: no sort then)
+  const at: number[] = [];
+  let sorted = true;
+  for (const s of supports) {
+    if (!restrainsDeflection(s)) continue;
+    if (at.length > 0 && s.at < (at[at.length - 1] as number)) sorted = false;
+    at.push(s.at);
+  }
+  if (!sorted) at.sort((a, b) => a - b);
   const out: BeamSpan[] = [];
   const first = at[0] as number;
   const last = at[at.length - 1] as number;

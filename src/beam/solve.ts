@@ -1,12 +1,13 @@
 import { attempt, type Result } from "../errors/index.js";
 import { loadResultant } from "../loads/index.js";
-import { extremesOf } from "../math/index.js";
+import { extremesOf, type Extremes, type PiecewisePolynomial } from "../math/index.js";
 import { buildModel } from "./model.js";
-import { recoverDiagrams, recoverReactions } from "./recover.js";
+import { recoverDiagrams, recoverReactions, type Diagrams } from "./recover.js";
+import { acquireScratch, releaseScratch } from "./scratch.js";
 import { balanceWarnings, conditioningWarnings, contraflexurePoints, spansOf } from "./results.js";
 import { checkStability } from "./stability.js";
 import { solveStiffness } from "./stiffness.js";
-import type { BeamInput, BeamSolution, SolveOptions } from "./types.js";
+import type { BeamInput, BeamPeaks, BeamResidual, BeamSolution, BeamSpan, BeamWarning, Reaction, SolveOptions } from "./types.js";
 import { validateBeam } from "./validate.js";
 
 /**
@@ -45,34 +46,63 @@ import { validateBeam } from "./validate.js";
 export function solveBeam(beam: BeamInput, options?: SolveOptions): BeamSolution {
   validateBeam(beam, options);
   checkStability(beam.length, beam.supports, beam.hinges ?? []);
-  const model = buildModel(beam, options);
-  const result = solveStiffness(model, beam.supports);
-  const diagrams = recoverDiagrams(model, result);
-  const reactions = recoverReactions(model, result, beam.supports);
-  const resultant = loadResultant(model.loads);
-  let force = -resultant.force;
-  let moment = resultant.moment;
-  for (const r of reactions) {
-    force += r.force;
-    moment += r.force * r.at + r.moment;
+  const scratch = acquireScratch();
+  try {
+    const model = buildModel(beam, options, scratch);
+    const result = solveStiffness(model, beam.supports, scratch);
+    const diagrams = recoverDiagrams(model, result);
+    const reactions = recoverReactions(model, result, beam.supports);
+    const resultant = loadResultant(model.loads);
+    let force = -resultant.force;
+    let moment = resultant.moment;
+    for (const r of reactions) {
+      force += r.force;
+      moment += r.force * r.at + r.moment;
+    }
+    const warnings = [...conditioningWarnings(model, beam.supports, result.pivotRatio), ...balanceWarnings(model, result, beam.supports)];
+    return solution(beam.length, Object.freeze(reactions), diagrams, Object.freeze({ force, moment }), Object.freeze(warnings), Object.freeze(spansOf(beam.length, beam.supports)));
+  } finally {
+    releaseScratch(scratch);
   }
-  const peaks = {
-    shear: extremesOf(diagrams.shear),
-    moment: extremesOf(diagrams.moment),
-    slope: extremesOf(diagrams.slope),
-    deflection: extremesOf(diagrams.deflection),
-  };
-  const scale = Math.max(Math.abs(peaks.moment.max.value), Math.abs(peaks.moment.min.value));
-  return Object.freeze({
-    length: beam.length,
-    reactions: Object.freeze(reactions),
-    ...diagrams,
-    peaks: Object.freeze(peaks),
-    contraflexure: Object.freeze(contraflexurePoints(diagrams.moment, scale)),
-    residual: Object.freeze({ force, moment }),
-    warnings: Object.freeze([...conditioningWarnings(model, beam.supports, result.pivotRatio), ...balanceWarnings(model, result, beam.supports)]),
-    spans: Object.freeze(spansOf(beam.length, beam.supports)),
+}
+
+/**
+ * The solution as an immutable value: plain frozen data (no getters, which V8 builds far more
+ * slowly than data properties), so it spreads, serialises and compares like any object.
+ */
+function solution(
+  length: number,
+  reactions: readonly Reaction[],
+  diagrams: Diagrams,
+  residual: BeamResidual,
+  warnings: readonly BeamWarning[],
+  spans: readonly BeamSpan[],
+): BeamSolution {
+  const moment = frozenExtremes(diagrams.moment);
+  const peaks: BeamPeaks = Object.freeze({
+    shear: frozenExtremes(diagrams.shear),
+    moment,
+    slope: frozenExtremes(diagrams.slope),
+    deflection: frozenExtremes(diagrams.deflection),
   });
+  const scale = Math.max(Math.abs(moment.max.value), Math.abs(moment.min.value));
+  return Object.freeze({
+    length,
+    reactions,
+    shear: diagrams.shear,
+    moment: diagrams.moment,
+    slope: diagrams.slope,
+    deflection: diagrams.deflection,
+    peaks,
+    contraflexure: Object.freeze(contraflexurePoints(diagrams.moment, scale)),
+    residual,
+    warnings,
+    spans,
+  });
+}
+
+function frozenExtremes(pp: PiecewisePolynomial): Extremes {
+  return extremesOf(pp);
 }
 
 /**

@@ -33,7 +33,7 @@ export function checkStability(length: number, supports: readonly Support[], hin
       issue("no-horizontal-restraint", ["supports"], "No support holds the member along its axis (rollers and springs let it slide): make one support a pin, fixed or guided.", {}),
     ]);
   const order = hinges.map((at, index) => ({ at, index })).sort((a, b) => a.at - b.at);
-  const sorted = [...supports].sort((a, b) => a.at - b.at);
+  const sorted = inOrder(supports) ? supports : [...supports].sort((a, b) => a.at - b.at);
   const close = 1e-10 * length;
   let allowed: Motion[] = [
     [1, 0],
@@ -85,6 +85,12 @@ export function checkStability(length: number, supports: readonly Support[], hin
             [0, 1],
           ];
   }
+}
+
+/** True when the supports come sorted by position (the usual case: no copy or sort needed). */
+function inOrder(supports: readonly Support[]): boolean {
+  for (let i = 1; i < supports.length; i++) if ((supports[i] as Support).at < (supports[i - 1] as Support).at) return false;
+  return true;
 }
 
 function dot(u: Motion, f: Motion): number {

@@ -2,6 +2,7 @@ import { FlexuraError, issue } from "../errors/index.js";
 import { factorBandedSymmetric, solveBandedSymmetric } from "../math/index.js";
 import type { Support } from "../supports/index.js";
 import type { BeamModel } from "./model.js";
+import type { Scratch } from "./scratch.js";
 
 /** Half-bandwidth of the stiffness matrix with DOFs ordered (v0, theta0, v1, theta1, ...). */
 const W = 3;
@@ -9,9 +10,9 @@ const S = W + 1;
 
 /** Nodal displacements and element end forces. */
 export interface StiffnessResult {
-  /** Displacements: deflection (up) and rotation (ccw) of each node, interleaved. */
+  /** Displacements: deflection (up) and rotation (ccw) of each node, interleaved (working storage: index it). */
   readonly displacements: Float64Array;
-  /** Forces on each element from its nodes: [Q left (up), M left (ccw), Q right, M right]. */
+  /** Forces on each element from its nodes: [Q left (up), M left (ccw), Q right, M right] (working storage: index it). */
   readonly endForces: Float64Array;
   /** Smallest pivot over original diagonal met in the factorisation (1 is perfect). */
   readonly pivotRatio: number;
@@ -62,12 +63,14 @@ function elementMatrices(model: BeamModel, e: number): void {
  * @throws FlexuraError `mechanism` when a pivot vanishes (a member the rigid-body check passed
  *   but float64 cannot hold, such as one resting only on vanishingly soft springs).
  */
-export function solveStiffness(model: BeamModel, supports: readonly Support[]): StiffnessResult {
+export function solveStiffness(model: BeamModel, supports: readonly Support[], scratch: Scratch): StiffnessResult {
   const n = model.nodes;
   const N = 2 * n;
   const elements = n - 1;
-  const band = new Float64Array(N * S);
-  const rhs = new Float64Array(N);
+  const band = scratch.band;
+  const rhs = scratch.rhs;
+  band.fill(0, 0, N * S);
+  rhs.fill(0, 0, N);
   for (let e = 0; e < elements; e++) {
     elementMatrices(model, e);
     const base = 2 * e;
@@ -82,8 +85,10 @@ export function solveStiffness(model: BeamModel, supports: readonly Support[]): 
     rhs[2 * i + 1] = (rhs[2 * i + 1] as number) + (model.couple[i] as number);
   }
   // supports: springs on the diagonal, rigid restraints as prescribed values
-  const prescribed = new Uint8Array(N);
-  const value = new Float64Array(N);
+  const prescribed = scratch.prescribed;
+  const value = scratch.value;
+  prescribed.fill(0, 0, N);
+  value.fill(0, 0, N);
   for (let s = 0; s < supports.length; s++) {
     const sup = supports[s] as Support;
     const node = model.supportNode[s] as number;
@@ -149,7 +154,7 @@ export function solveStiffness(model: BeamModel, supports: readonly Support[]): 
     ]);
   }
   const d = solveBandedSymmetric(band, N, W, rhs);
-  const endForces = new Float64Array(4 * elements);
+  const endForces = scratch.endForces;
   for (let e = 0; e < elements; e++) {
     elementMatrices(model, e);
     const base = 2 * e;

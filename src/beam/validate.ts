@@ -9,8 +9,8 @@ export const SAME_POINT = 1e-10;
 
 function validateStiffness(stiffness: unknown, length: number, found: IssueCollector): void {
   if (typeof stiffness === "number" || !Array.isArray(stiffness)) {
-    if (requireFinite(found, stiffness, ["stiffness"], "bending stiffness E I") && !(stiffness > 0))
-      found.add("stiffness-not-positive", ["stiffness"], `The bending stiffness E I must be positive; got ${stiffness}.`, { value: stiffness });
+    if ((Number.isFinite(stiffness) || requireFinite(found, stiffness, ["stiffness"], "bending stiffness E I")) && !((stiffness as number) > 0))
+      found.add("stiffness-not-positive", ["stiffness"], `The bending stiffness E I must be positive; got ${stiffness as number}.`, { value: stiffness });
     return;
   }
   if (stiffness.length === 0) {
@@ -98,8 +98,8 @@ export function validateBeam(beam: unknown, options: SolveOptions | undefined): 
   }
   const b = beam as Record<string, unknown>;
   let length = Number.NaN;
-  if (requireFinite(found, b["length"], ["length"], "member length")) {
-    length = b["length"];
+  if (Number.isFinite(b["length"]) || requireFinite(found, b["length"], ["length"], "member length")) {
+    length = b["length"] as number;
     if (!(length > 0)) found.add("length-not-positive", ["length"], `The member length must be positive; got ${length}.`, { length });
   }
   validateStiffness(b["stiffness"], length, found);

@@ -30,41 +30,42 @@ export function validateLoads(loads: unknown, length: number, found: IssueCollec
   }
   const before = found.issues.length;
   const checkPositions = length > 0 && Number.isFinite(length);
+  // Numbers that are fine are checked inline, so the usual, valid input allocates no paths or messages.
   for (let i = 0; i < loads.length; i++) {
     const l: unknown = loads[i];
-    const path = ["loads", i] as const;
     if (typeof l !== "object" || l === null) {
-      found.add("load-not-an-object", path, `Each load must be an object with a kind; got ${describeValue(l)}.`);
+      found.add("load-not-an-object", ["loads", i], `Each load must be an object with a kind; got ${describeValue(l)}.`);
       continue;
     }
     const load = l as Record<string, unknown>;
     const kind = load["kind"];
     if (load["case"] !== undefined && typeof load["case"] !== "string")
-      found.add("load-case-not-a-string", [...path, "case"], `A load case must be a name (a string); got ${describeValue(load["case"])}.`);
+      found.add("load-case-not-a-string", ["loads", i, "case"], `A load case must be a name (a string); got ${describeValue(load["case"])}.`);
     if (kind === "point" || kind === "couple") {
       const what = kind === "point" ? "point load" : "couple";
-      const atOk = requireFinite(found, load["at"], [...path, "at"], `${what} position`);
-      requireFinite(found, load["value"], [...path, "value"], `${what} value`);
-      if (atOk && checkPositions && !inside(load["at"] as number, length))
-        found.add("load-outside-member", [...path, "at"], `The ${what} at x = ${String(load["at"])} lies off the member, which runs from 0 to ${length}.`, {
-          at: load["at"],
+      const at = load["at"];
+      const atOk = Number.isFinite(at) || requireFinite(found, at, ["loads", i, "at"], `${what} position`);
+      if (!Number.isFinite(load["value"])) requireFinite(found, load["value"], ["loads", i, "value"], `${what} value`);
+      if (atOk && checkPositions && !inside(at as number, length))
+        found.add("load-outside-member", ["loads", i, "at"], `The ${what} at x = ${String(at)} lies off the member, which runs from 0 to ${length}.`, {
+          at,
           length,
         });
     } else if (kind === "distributed") {
-      const fromOk = requireFinite(found, load["from"], [...path, "from"], "start position of the distributed load");
-      const toOk = requireFinite(found, load["to"], [...path, "to"], "end position of the distributed load");
-      requireFinite(found, load["start"], [...path, "start"], "intensity at the start of the distributed load");
-      requireFinite(found, load["end"], [...path, "end"], "intensity at the end of the distributed load");
-      const from = load["from"] as number;
-      const to = load["to"] as number;
-      if (fromOk && toOk && !(to > from))
-        found.add("load-extent-not-positive", [...path, "to"], `A distributed load must end after it starts; got from = ${from}, to = ${to}.`, { from, to });
-      if (fromOk && checkPositions && !inside(from, length))
-        found.add("load-outside-member", [...path, "from"], `The distributed load starts at x = ${from}, off the member, which runs from 0 to ${length}.`, { at: from, length });
-      if (toOk && checkPositions && !inside(to, length))
-        found.add("load-outside-member", [...path, "to"], `The distributed load ends at x = ${to}, off the member, which runs from 0 to ${length}.`, { at: to, length });
+      const from = load["from"];
+      const to = load["to"];
+      const fromOk = Number.isFinite(from) || requireFinite(found, from, ["loads", i, "from"], "start position of the distributed load");
+      const toOk = Number.isFinite(to) || requireFinite(found, to, ["loads", i, "to"], "end position of the distributed load");
+      if (!Number.isFinite(load["start"])) requireFinite(found, load["start"], ["loads", i, "start"], "intensity at the start of the distributed load");
+      if (!Number.isFinite(load["end"])) requireFinite(found, load["end"], ["loads", i, "end"], "intensity at the end of the distributed load");
+      if (fromOk && toOk && !((to as number) > (from as number)))
+        found.add("load-extent-not-positive", ["loads", i, "to"], `A distributed load must end after it starts; got from = ${from as number}, to = ${to as number}.`, { from, to });
+      if (fromOk && checkPositions && !inside(from as number, length))
+        found.add("load-outside-member", ["loads", i, "from"], `The distributed load starts at x = ${from as number}, off the member, which runs from 0 to ${length}.`, { at: from, length });
+      if (toOk && checkPositions && !inside(to as number, length))
+        found.add("load-outside-member", ["loads", i, "to"], `The distributed load ends at x = ${to as number}, off the member, which runs from 0 to ${length}.`, { at: to, length });
     } else {
-      found.add("load-kind-unknown", [...path, "kind"], `Unknown load kind ${describeValue(kind)}; use "point", "couple" or "distributed".`, { kind: describeValue(kind) });
+      found.add("load-kind-unknown", ["loads", i, "kind"], `Unknown load kind ${describeValue(kind)}; use "point", "couple" or "distributed".`, { kind: describeValue(kind) });
     }
   }
   return found.issues.length === before;

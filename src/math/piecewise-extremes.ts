@@ -1,6 +1,6 @@
 import { fail } from "../errors/index.js";
 import type { PiecewisePolynomial } from "./piecewise.js";
-import { evaluatePolynomial, polynomialRootsIn } from "./polynomial.js";
+import { clearOfZero, evaluatePolynomial, rootsToScratch, scratchRoots } from "./polynomial.js";
 
 /** A value and where it occurs. */
 export interface LocatedValue {
@@ -51,7 +51,6 @@ export function extremesOf(pp: PiecewisePolynomial, lo?: number, hi?: number): E
   let maxX = from;
   let minV = Infinity;
   let minX = from;
-  const roots: number[] = [];
   const pieces = b.length - 1;
   for (let i = 0; i < pieces; i++) {
     const x0 = b[i] as number;
@@ -75,9 +74,10 @@ export function extremesOf(pp: PiecewisePolynomial, lo?: number, hi?: number): E
     }
     if (e > a && d >= 2) {
       for (let k = 1; k <= d; k++) derivative[k - 1] = k * (c[o + k] as number);
-      roots.length = 0;
-      polynomialRootsIn(derivative, 0, d - 1, a, e, roots);
-      for (const t of roots) {
+      // a piece whose derivative keeps one sign is monotone: its ends are its extremes
+      const count = clearOfZero(derivative, 0, d - 1, e) ? 0 : rootsToScratch(derivative, 0, d - 1, a, e);
+      for (let r = 0; r < count; r++) {
+        const t = scratchRoots[r] as number;
         v = evaluatePolynomial(c, o, d, t);
         if (v > maxV) {
       maxV = v;
@@ -122,7 +122,6 @@ export function rootsOf(pp: PiecewisePolynomial, lo?: number, hi?: number): read
   const d = pp.degree;
   const stride = d + 1;
   const out: number[] = [];
-  const local: number[] = [];
   for (let i = 0; i + 1 < b.length; i++) {
     const x0 = b[i] as number;
     const x1 = b[i + 1] as number;
@@ -131,9 +130,9 @@ export function rootsOf(pp: PiecewisePolynomial, lo?: number, hi?: number): read
     const xe = Math.min(x1, to);
     const a = xa - x0;
     const e = xe - x0;
-    local.length = 0;
-    polynomialRootsIn(pp.coefficients, i * stride, d, a, e, local);
-    for (const t of local) {
+    const count = rootsToScratch(pp.coefficients, i * stride, d, a, e);
+    for (let r = 0; r < count; r++) {
+      const t = scratchRoots[r] as number;
       const x = t === a ? xa : t === e ? xe : Math.min(t + x0, xe);
       const prev = out.length > 0 ? (out[out.length - 1] as number) : Number.NaN;
       if (!(Math.abs(x - prev) <= 1e-12 * (Math.abs(x) + (x1 - x0)))) out.push(x);

@@ -7,7 +7,9 @@ import { evaluatePolynomial } from "./polynomial.js";
  * full precision far from x = 0).
  *
  * Treat it as immutable: flexura never changes one after building it, and the typed arrays
- * must not be written to by callers either.
+ * must not be written to by callers either. The arrays of a solved member may be views into a
+ * larger buffer shared with other results (as Node pools small Buffers): take a `.slice()` for
+ * a copy of your own, for example before transferring its buffer to a worker.
  *
  * @example
  * ```ts
@@ -152,18 +154,88 @@ export function evaluatePiecewiseMany(pp: PiecewisePolynomial, xs: ArrayLike<num
   const x0 = b[0] as number;
   const x1 = b[last + 1] as number;
   let i = 0;
-  for (let j = 0; j < n; j++) {
-    const x = xs[j] as number;
-    if (!(x >= x0 && x <= x1)) fail("outside-domain", ["xs", j], `x = ${x} lies outside [${x0}, ${x1}].`, { x });
-    if (x < (b[i] as number)) i = findPiece(pp, x, "right");
-    while (i < last && x >= (b[i + 1] as number)) i++;
-    const o = i * stride;
-    const t = x - (b[i] as number);
-    let v = c[o + d] as number;
-    for (let k = d - 1; k >= 0; k--) v = v * t + (c[o + k] as number);
-    result[j] = v;
+  for (let j = 0; j < n; ) {
+    // place the cursor on the piece of xs[j]: forward by steps for sorted points, by binary search when a point goes back
+    const first = xs[j] as number;
+    if (!(first >= x0 && first <= x1)) fail("outside-domain", ["xs", j], `x = ${first} lies outside [${x0}, ${x1}].`, { x: first });
+    if (first < (b[i] as number)) i = findPiece(pp, first, "right");
+    while (i < last && first >= (b[i + 1] as number)) i++;
+    // then evaluate the run of points that stay on this piece, its coefficients held in locals
+    // (Horner's rule: the same operations in the same order as evaluatePolynomial)
+    j = evaluateRun(c, i * stride, d, b[i] as number, b[i + 1] as number, i === last, xs, j, result);
   }
   return result;
+}
+
+/**
+ * Evaluates the piece at `c[o..o+d]` (starting at `lo`, ending at `end`, the end included when
+ * `closed`) at xs[j], xs[j+1], ... while they lie on it; returns the index of the first point off it.
+ */
+function evaluateRun(c: Float64Array, o: number, d: number, lo: number, end: number, closed: boolean, xs: ArrayLike<number>, j: number, out: Float64Array): number {
+  const n = xs.length;
+  const c0 = c[o] as number;
+  const c1 = d >= 1 ? (c[o + 1] as number) : 0;
+  const c2 = d >= 2 ? (c[o + 2] as number) : 0;
+  const c3 = d >= 3 ? (c[o + 3] as number) : 0;
+  const c4 = d >= 4 ? (c[o + 4] as number) : 0;
+  const c5 = d >= 5 ? (c[o + 5] as number) : 0;
+  // one loop per degree, so that the loop body holds no branch but the test for the piece's end
+  switch (d) {
+    case 0:
+      for (; j < n; j++) {
+        const x = xs[j] as number;
+        if (!(x >= lo && (x < end || (closed && x === end)))) break;
+        out[j] = c0;
+      }
+      return j;
+    case 1:
+      for (; j < n; j++) {
+        const x = xs[j] as number;
+        if (!(x >= lo && (x < end || (closed && x === end)))) break;
+        const t = x - lo;
+        out[j] = c1 * t + c0;
+      }
+      return j;
+    case 2:
+      for (; j < n; j++) {
+        const x = xs[j] as number;
+        if (!(x >= lo && (x < end || (closed && x === end)))) break;
+        const t = x - lo;
+        out[j] = (c2 * t + c1) * t + c0;
+      }
+      return j;
+    case 3:
+      for (; j < n; j++) {
+        const x = xs[j] as number;
+        if (!(x >= lo && (x < end || (closed && x === end)))) break;
+        const t = x - lo;
+        out[j] = ((c3 * t + c2) * t + c1) * t + c0;
+      }
+      return j;
+    case 4:
+      for (; j < n; j++) {
+        const x = xs[j] as number;
+        if (!(x >= lo && (x < end || (closed && x === end)))) break;
+        const t = x - lo;
+        out[j] = (((c4 * t + c3) * t + c2) * t + c1) * t + c0;
+      }
+      return j;
+    case 5:
+      for (; j < n; j++) {
+        const x = xs[j] as number;
+        if (!(x >= lo && (x < end || (closed && x === end)))) break;
+        const t = x - lo;
+        out[j] = ((((c5 * t + c4) * t + c3) * t + c2) * t + c1) * t + c0;
+      }
+      return j;
+    default:
+      for (; j < n; j++) {
+        const x = xs[j] as number;
+        if (!(x >= lo && (x < end || (closed && x === end)))) break;
+        out[j] = evaluatePolynomial(c, o, d, x - lo);
+      }
+      return j;
+  }
 }
 
 /** One piece, for plotting or export: the polynomial in powers of `x - from`. */

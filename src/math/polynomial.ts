@@ -20,10 +20,16 @@ export function evaluatePolynomial(coefficients: ArrayLike<number>, offset: numb
   return v;
 }
 
-/** Scratch storage for derivative coefficients and roots, one run per recursion level. */
+/** Scratch storage, one run per recursion level: derivative coefficients, interval ends, roots found. */
 const MAX_DEGREE = 8;
+const RUN = MAX_DEGREE + 2;
 const derivativeScratch = new Float64Array((MAX_DEGREE + 1) * (MAX_DEGREE + 1));
-const rootScratch = new Float64Array((MAX_DEGREE + 2) * (MAX_DEGREE + 2));
+const rootScratch = new Float64Array((MAX_DEGREE + 2) * RUN);
+/**
+ * Roots written by {@link rootsToScratch}: the roots of the last call sit at indices
+ * `0 .. count - 1` (read them before the next call). Deeper levels use the later runs.
+ */
+export const scratchRoots = new Float64Array((MAX_DEGREE + 2) * RUN);
 
 /**
  * Finds the real roots of a polynomial in the closed interval `[lo, hi]`, in increasing order.
@@ -50,44 +56,57 @@ const rootScratch = new Float64Array((MAX_DEGREE + 2) * (MAX_DEGREE + 2));
  * ```
  */
 export function polynomialRootsIn(coefficients: ArrayLike<number>, offset: number, degree: number, lo: number, hi: number, out: number[]): number {
-  let d = degree;
-  while (d > 0 && coefficients[offset + d] === 0) d--;
-  if (d === 0) return 0;
+  const count = rootsToScratch(coefficients, offset, degree, lo, hi);
   const start = out.length;
-  rootsRecursive(coefficients, offset, d, lo, hi, out, 0);
+  for (let i = 0; i < count; i++) {
+    const x = scratchRoots[i] as number;
+    // a root equal to the last one already in `out` is not repeated
+    if (i === 0 && out.length > 0 && out[out.length - 1] === x) continue;
+    out.push(x);
+  }
   return out.length - start;
 }
 
-function pushRoot(out: number[], r: number, lo: number, hi: number): void {
-  const slack = 1e-12 * (Math.abs(hi - lo) + Math.abs(lo) + Math.abs(hi));
-  if (!(r >= lo - slack && r <= hi + slack)) return;
-  const x = r < lo ? lo : r > hi ? hi : r;
-  const last = out.length > 0 ? (out[out.length - 1] as number) : Number.NaN;
-  if (x === last) return;
-  out.push(x);
+/**
+ * As {@link polynomialRootsIn}, without allocating: writes the roots to
+ * `scratchRoots[0 .. count - 1]` and returns `count`. For flexura's own kernels.
+ */
+export function rootsToScratch(coefficients: ArrayLike<number>, offset: number, degree: number, lo: number, hi: number): number {
+  let d = degree;
+  while (d > 0 && coefficients[offset + d] === 0) d--;
+  if (d === 0) return 0;
+  return rootsRecursive(coefficients, offset, d, lo, hi, 0);
 }
 
-function rootsRecursive(c: ArrayLike<number>, off: number, d: number, lo: number, hi: number, out: number[], level: number): void {
+/** Appends root `r` (clamped into [lo, hi] when within slack) to the run at `base` holding `n` roots; returns the new count. */
+function pushRoot(base: number, n: number, r: number, lo: number, hi: number): number {
+  const slack = 1e-12 * (Math.abs(hi - lo) + Math.abs(lo) + Math.abs(hi));
+  if (!(r >= lo - slack && r <= hi + slack)) return n;
+  const x = r < lo ? lo : r > hi ? hi : r;
+  if (n > 0 && x === scratchRoots[base + n - 1]) return n;
+  scratchRoots[base + n] = x;
+  return n + 1;
+}
+
+/** Roots of c[off..off+d] in [lo, hi] into the scratch run of `level`; returns their number. */
+function rootsRecursive(c: ArrayLike<number>, off: number, d: number, lo: number, hi: number, level: number): number {
   while (d > 0 && c[off + d] === 0) d--;
-  if (d === 0) return;
-  if (d === 1) {
-    pushRoot(out, -(c[off] as number) / (c[off + 1] as number), lo, hi);
-    return;
-  }
-  if (d === 2) {
-    quadraticRoots(c[off] as number, c[off + 1] as number, c[off + 2] as number, lo, hi, out);
-    return;
-  }
-  // Derivative into scratch, then its roots (recursively) into scratch.
+  if (d === 0) return 0;
+  const base = level * RUN;
+  if (d === 1) return pushRoot(base, 0, -(c[off] as number) / (c[off + 1] as number), lo, hi);
+  if (d === 2) return quadraticRoots(c[off] as number, c[off + 1] as number, c[off + 2] as number, lo, hi, base);
+  // Derivative into scratch, then its roots (recursively, one level down) into scratch.
   const dOff = level * (MAX_DEGREE + 1);
   for (let k = 1; k <= d; k++) derivativeScratch[dOff + k - 1] = k * (c[off + k] as number);
-  const crit: number[] = [];
-  rootsRecursive(derivativeScratch, dOff, d - 1, lo, hi, crit, level + 1);
-  const rOff = level * (MAX_DEGREE + 2);
+  const critical = rootsRecursive(derivativeScratch, dOff, d - 1, lo, hi, level + 1);
+  const critBase = base + RUN;
   let n = 0;
-  rootScratch[rOff + n++] = lo;
-  for (const r of crit) if (r > lo && r < hi) rootScratch[rOff + n++] = r;
-  rootScratch[rOff + n++] = hi;
+  rootScratch[base + n++] = lo;
+  for (let i = 0; i < critical; i++) {
+    const r = scratchRoots[critBase + i] as number;
+    if (r > lo && r < hi) rootScratch[base + n++] = r;
+  }
+  rootScratch[base + n++] = hi;
   // Scale of the polynomial on the interval, for "touching zero" decisions.
   let scale = 0;
   const m = Math.max(Math.abs(lo), Math.abs(hi));
@@ -97,33 +116,35 @@ function rootsRecursive(c: ArrayLike<number>, off: number, d: number, lo: number
     p *= m;
   }
   const touch = 64 * Number.EPSILON * scale;
-  let a = rootScratch[rOff] as number;
+  let found = 0;
+  let a = rootScratch[base] as number;
   let fa = evaluatePolynomial(c, off, d, a);
-  if (fa === 0) pushRoot(out, a, lo, hi);
+  if (fa === 0) found = pushRoot(base, found, a, lo, hi);
   for (let i = 1; i < n; i++) {
-    const b = rootScratch[rOff + i] as number;
+    const b = rootScratch[base + i] as number;
     const fb = evaluatePolynomial(c, off, d, b);
     if (fb === 0) {
-      pushRoot(out, b, lo, hi);
+      found = pushRoot(base, found, b, lo, hi);
     } else if (fa !== 0 && (fa < 0) !== (fb < 0)) {
-      pushRoot(out, bracketedRoot(c, off, d, a, b, fa, fb), lo, hi);
+      found = pushRoot(base, found, bracketedRoot(c, off, d, a, b, fa, fb), lo, hi);
     } else if (i < n - 1 && Math.abs(fb) <= touch) {
       // a critical point where the polynomial touches zero without crossing
-      pushRoot(out, b, lo, hi);
+      found = pushRoot(base, found, b, lo, hi);
     }
     a = b;
     fa = fb;
   }
+  return found;
 }
 
-function quadraticRoots(c0: number, c1: number, c2: number, lo: number, hi: number, out: number[]): void {
+function quadraticRoots(c0: number, c1: number, c2: number, lo: number, hi: number, base: number): number {
   const disc = c1 * c1 - 4 * c2 * c0;
   if (disc < 0) {
     // a double root lost to rounding: keep it when the vertex value is zero to rounding
     const v = -c1 / (2 * c2);
     const fv = c0 + v * (c1 + v * c2);
-    if (Math.abs(fv) <= 64 * Number.EPSILON * (Math.abs(c0) + Math.abs(c1 * v) + Math.abs(c2 * v * v))) pushRoot(out, v, lo, hi);
-    return;
+    if (Math.abs(fv) <= 64 * Number.EPSILON * (Math.abs(c0) + Math.abs(c1 * v) + Math.abs(c2 * v * v))) return pushRoot(base, 0, v, lo, hi);
+    return 0;
   }
   const q = -0.5 * (c1 + (c1 >= 0 ? Math.sqrt(disc) : -Math.sqrt(disc)));
   let r1 = q / c2;
@@ -133,8 +154,8 @@ function quadraticRoots(c0: number, c1: number, c2: number, lo: number, hi: numb
     r1 = r2;
     r2 = t;
   }
-  pushRoot(out, r1, lo, hi);
-  if (r2 !== r1) pushRoot(out, r2, lo, hi);
+  const n = pushRoot(base, 0, r1, lo, hi);
+  return r2 !== r1 ? pushRoot(base, n, r2, lo, hi) : n;
 }
 
 /** Root of a polynomial in (a, b) where it changes sign; Illinois false position with bisection safeguard. */
@@ -161,4 +182,27 @@ function bracketedRoot(c: ArrayLike<number>, off: number, d: number, a: number, 
     }
   }
   return Math.abs(fa) < Math.abs(fb) ? a : b;
+}
+
+/**
+ * True when the polynomial `c[off] + ... + c[off+d] t^d` keeps one sign over `0 <= t <= h`
+ * by a wide margin: a bound from its terms (each `c_k t^k` lies between 0 and `c_k h^k`) stays
+ * more than 1e-9 of their total size away from zero. Such a polynomial has no root there, nor
+ * within the rounding slack {@link polynomialRootsIn} allows at the ends, so root finding on it
+ * can be skipped: the cheap test that spares most pieces of a diagram.
+ */
+export function clearOfZero(c: ArrayLike<number>, off: number, d: number, h: number): boolean {
+  let lo = c[off] as number;
+  let hi = lo;
+  let size = Math.abs(lo);
+  let p = 1;
+  for (let k = 1; k <= d; k++) {
+    p *= h;
+    const term = (c[off + k] as number) * p;
+    if (term > 0) hi += term;
+    else lo += term;
+    size += Math.abs(term);
+  }
+  const margin = 1e-9 * size;
+  return lo > margin || hi < -margin;
 }

@@ -33,55 +33,60 @@ export function validateSupports(supports: unknown, length: number, found: Issue
   }
   const before = found.issues.length;
   const checkPositions = length > 0 && Number.isFinite(length);
+  // positions of the supports, in input order, and whether they come sorted (they usually do)
   const seen: { at: number; index: number }[] = [];
+  let inOrder = true;
+  let previous = -Infinity;
   for (let i = 0; i < supports.length; i++) {
     const raw: unknown = supports[i];
-    const path = ["supports", i] as const;
     if (typeof raw !== "object" || raw === null) {
-      found.add("support-not-an-object", path, `Each support must be an object with a kind; got ${describeValue(raw)}.`);
+      found.add("support-not-an-object", ["supports", i], `Each support must be an object with a kind; got ${describeValue(raw)}.`);
       continue;
     }
     const s = raw as Record<string, unknown>;
     const kind = s["kind"];
     if (typeof kind !== "string" || !KINDS.has(kind)) {
-      found.add("support-kind-unknown", [...path, "kind"], `Unknown support kind ${describeValue(kind)}; use "pin", "roller", "fixed", "guided" or "spring".`, {
+      found.add("support-kind-unknown", ["supports", i, "kind"], `Unknown support kind ${describeValue(kind)}; use "pin", "roller", "fixed", "guided" or "spring".`, {
         kind: describeValue(kind),
       });
       continue;
     }
-    if (requireFinite(found, s["at"], [...path, "at"], "support position")) {
-      const at = s["at"];
-      if (checkPositions && !(at >= -POSITION_TOLERANCE * length && at <= length * (1 + POSITION_TOLERANCE)))
-        found.add("support-outside-member", [...path, "at"], `The ${kind} support at x = ${at} lies off the member, which runs from 0 to ${length}.`, { at, length });
-      seen.push({ at, index: i });
+    const at = s["at"];
+    if (Number.isFinite(at) || requireFinite(found, at, ["supports", i, "at"], "support position")) {
+      const x = at as number;
+      if (checkPositions && !(x >= -POSITION_TOLERANCE * length && x <= length * (1 + POSITION_TOLERANCE)))
+        found.add("support-outside-member", ["supports", i, "at"], `The ${kind} support at x = ${x} lies off the member, which runs from 0 to ${length}.`, { at: x, length });
+      if (x < previous) inOrder = false;
+      previous = x;
+      seen.push({ at: x, index: i });
     }
     const hasK = s["stiffness"] !== undefined;
     const hasKr = s["rotationalStiffness"] !== undefined;
     if (kind === "spring") {
-      if (hasK) positive(found, s["stiffness"], [...path, "stiffness"], "spring stiffness", "spring-stiffness-not-positive");
-      if (hasKr) positive(found, s["rotationalStiffness"], [...path, "rotationalStiffness"], "rotational spring stiffness", "spring-stiffness-not-positive");
+      if (hasK) positive(found, s["stiffness"], ["supports", i, "stiffness"], "spring stiffness", "spring-stiffness-not-positive");
+      if (hasKr) positive(found, s["rotationalStiffness"], ["supports", i, "rotationalStiffness"], "rotational spring stiffness", "spring-stiffness-not-positive");
       if (!hasK && !hasKr)
-        found.add("spring-without-stiffness", path, "A spring support needs a stiffness (force per length), a rotationalStiffness (moment per radian), or both.");
-    } else {
+        found.add("spring-without-stiffness", ["supports", i], "A spring support needs a stiffness (force per length), a rotationalStiffness (moment per radian), or both.");
+    } else if (hasK || hasKr) {
       for (const field of ["stiffness", "rotationalStiffness"] as const)
         if (s[field] !== undefined)
-          found.add("support-field-not-applicable", [...path, field], `A ${kind} support is rigid and takes no ${field}; use a spring support for an elastic one.`);
+          found.add("support-field-not-applicable", ["supports", i, field], `A ${kind} support is rigid and takes no ${field}; use a spring support for an elastic one.`);
     }
     const holdsDeflection = kind === "pin" || kind === "roller" || kind === "fixed" || (kind === "spring" && hasK);
     const holdsRotation = kind === "fixed" || kind === "guided" || (kind === "spring" && hasKr);
     if (s["settlement"] !== undefined) {
       if (!holdsDeflection)
-        found.add("support-field-not-applicable", [...path, "settlement"], `A ${kind} support${kind === "spring" ? " without a stiffness" : ""} does not hold deflection, so it cannot settle.`);
-      else requireFinite(found, s["settlement"], [...path, "settlement"], "settlement");
+        found.add("support-field-not-applicable", ["supports", i, "settlement"], `A ${kind} support${kind === "spring" ? " without a stiffness" : ""} does not hold deflection, so it cannot settle.`);
+      else if (!Number.isFinite(s["settlement"])) requireFinite(found, s["settlement"], ["supports", i, "settlement"], "settlement");
     }
     if (s["rotation"] !== undefined) {
       if (!holdsRotation)
-        found.add("support-field-not-applicable", [...path, "rotation"], `A ${kind} support${kind === "spring" ? " without a rotationalStiffness" : ""} does not hold rotation, so it cannot impose one.`);
-      else requireFinite(found, s["rotation"], [...path, "rotation"], "prescribed rotation");
+        found.add("support-field-not-applicable", ["supports", i, "rotation"], `A ${kind} support${kind === "spring" ? " without a rotationalStiffness" : ""} does not hold rotation, so it cannot impose one.`);
+      else if (!Number.isFinite(s["rotation"])) requireFinite(found, s["rotation"], ["supports", i, "rotation"], "prescribed rotation");
     }
   }
-  // duplicates: sort by position, compare neighbours (O(n log n) for long continuous members)
-  seen.sort((a, b) => a.at - b.at || a.index - b.index);
+  // duplicates: sort by position (already so when the input is in order), compare neighbours
+  if (!inOrder) seen.sort((a, b) => a.at - b.at || a.index - b.index);
   const close = 1e-10 * (checkPositions ? length : 1);
   for (let k = 1; k < seen.length; k++) {
     const a = seen[k - 1] as { at: number; index: number };

@@ -1,0 +1,115 @@
+/**
+ * Working storage for the solve, reused from one solve to the next so that a solve allocates
+ * only what it returns. Solves are synchronous; a solve started while another is under way (from
+ * a getter on the input, say) gets storage of its own, so no solve ever sees another's numbers.
+ * Arrays are at least as long as asked for, often longer: index them, never read `.length`.
+ */
+export interface Scratch {
+  /** Candidate node positions, before sorting and merging. */
+  raw: Float64Array;
+  /** Per element: E I, load intensity at each end, hinge release at the right end. */
+  ei: Float64Array;
+  wLeft: Float64Array;
+  wRight: Float64Array;
+  released: Uint8Array;
+  /** Per node: applied force and couple. */
+  force: Float64Array;
+  couple: Float64Array;
+  /** Per support: its node. */
+  supportNode: Int32Array;
+  /** Stiffness system: band, right-hand side (then displacements), prescribed flags and values. */
+  band: Float64Array;
+  rhs: Float64Array;
+  prescribed: Uint8Array;
+  value: Float64Array;
+  /** Per element: the four end forces. */
+  endForces: Float64Array;
+}
+
+function fresh(): Scratch {
+  // empty to start with: each array is replaced by a long enough one on first use
+  const f = new Float64Array(0);
+  const u = new Uint8Array(0);
+  return { raw: f, ei: f, wLeft: f, wRight: f, released: u, force: f, couple: f, supportNode: new Int32Array(0), band: f, rhs: f, prescribed: u, value: f, endForces: f };
+}
+
+const shared = fresh();
+let sharedInUse = false;
+
+/** Storage for one solve: the shared one when free, else a new one. Give it back with {@link releaseScratch}. */
+export function acquireScratch(): Scratch {
+  if (sharedInUse) return fresh();
+  sharedInUse = true;
+  return shared;
+}
+
+/** Returns storage taken by {@link acquireScratch}. */
+export function releaseScratch(scratch: Scratch): void {
+  if (scratch === shared) sharedInUse = false;
+}
+
+/** Grows a capacity to at least `n`, with headroom so that slowly growing members do not reallocate each time. */
+function capacity(current: number, n: number): number {
+  return current >= n ? current : Math.max(n, 2 * current, 64);
+}
+
+/** Makes room for `count` candidate node positions. */
+export function ensureRaw(s: Scratch, count: number): void {
+  if (s.raw.length < count) s.raw = new Float64Array(capacity(s.raw.length, count));
+}
+
+/**
+ * Makes room for a member of `nodes` nodes and `supports` supports, and zeroes the per-node and
+ * per-element accumulators (the stiffness system is zeroed by its own solve).
+ */
+export function ensureNodes(s: Scratch, nodes: number, supports: number): void {
+  const elements = nodes - 1;
+  if (s.ei.length < elements) {
+    const c = capacity(s.ei.length, elements);
+    s.ei = new Float64Array(c);
+    s.wLeft = new Float64Array(c);
+    s.wRight = new Float64Array(c);
+    s.released = new Uint8Array(c);
+    s.endForces = new Float64Array(4 * c);
+  } else {
+    s.wLeft.fill(0, 0, elements);
+    s.wRight.fill(0, 0, elements);
+    s.released.fill(0, 0, elements);
+  }
+  if (s.force.length < nodes) {
+    const c = capacity(s.force.length, nodes);
+    s.force = new Float64Array(c);
+    s.couple = new Float64Array(c);
+    s.rhs = new Float64Array(2 * c);
+    s.prescribed = new Uint8Array(2 * c);
+    s.value = new Float64Array(2 * c);
+    s.band = new Float64Array(8 * c);
+  } else {
+    s.force.fill(0, 0, nodes);
+    s.couple.fill(0, 0, nodes);
+  }
+  if (s.supportNode.length < supports) s.supportNode = new Int32Array(capacity(s.supportNode.length, supports));
+}
+
+/**
+ * Result storage for small members is carved from shared blocks, as Node carves small Buffers
+ * from a pool: allocating a typed array costs far more than filling it (about a microsecond, most
+ * of it in the garbage collector), so small results share a block of POOL doubles. Each result
+ * owns its own stretch and nothing writes to a stretch once handed out; a block lives while any
+ * result cut from it does. A result larger than a quarter of a block gets storage of its own.
+ */
+const POOL = 2048;
+let pool = new Float64Array(POOL);
+let poolUsed = 0;
+
+/** Storage for `size` result numbers: a fresh stretch of a shared block, or a new array when large. */
+export function takeOutput(size: number): Float64Array {
+  if (size > POOL / 4) return new Float64Array(size);
+  if (poolUsed + size > POOL) {
+    pool = new Float64Array(POOL);
+    poolUsed = 0;
+  }
+  const out = pool.subarray(poolUsed, poolUsed + size);
+  poolUsed += size;
+  return out;
+}
