@@ -1,34 +1,13 @@
 import { IssueCollector, attempt, type Result } from "../errors/index.js";
 import { checkSection, remember } from "./prepare.js";
-import type { Material, Section, SectionPart, SectionPoint } from "./types.js";
+import type { Section, SectionPart } from "./types.js";
 
-function freezePoint(p: SectionPoint): SectionPoint {
-  return Object.freeze({ y: p.y, z: p.z });
-}
-
-function freezeMaterial(m: Material): Material {
-  return Object.freeze({ ...m });
-}
-
-function freezePart(part: SectionPart): SectionPart {
-  const extra = {
-    ...(part.hole !== undefined ? { hole: part.hole } : {}),
-    ...(part.material !== undefined ? { material: freezeMaterial(part.material) } : {}),
-  };
-  switch (part.kind) {
-    case "polygon":
-      return Object.freeze({ kind: "polygon", points: Object.freeze(part.points.map(freezePoint)), ...extra });
-    case "circle":
-      return Object.freeze({ kind: "circle", centre: freezePoint(part.centre), radius: part.radius, ...extra });
-    case "sector":
-      return Object.freeze({ kind: "sector", centre: freezePoint(part.centre), radius: part.radius, startAngle: part.startAngle, sweep: part.sweep, ...extra });
-    case "fillet":
-      return Object.freeze({ kind: "fillet", corner: freezePoint(part.corner), radius: part.radius, orientation: part.orientation, ...extra });
-    default: {
-      const never: never = part;
-      return never;
-    }
-  }
+/** A deep, frozen copy of plain data (parts, points, materials). */
+function frozenCopy<T>(value: T): T {
+  if (typeof value !== "object" || value === null) return value;
+  const copy: Record<string, unknown> | unknown[] = Array.isArray(value) ? [] : {};
+  for (const [k, v] of Object.entries(value)) (copy as Record<string, unknown>)[k] = frozenCopy(v);
+  return Object.freeze(copy) as T;
 }
 
 /**
@@ -66,7 +45,7 @@ export function section(parts: readonly SectionPart[]): Section {
   }
   const valid = checkSection({ parts }, found);
   found.throwIfAny();
-  const frozen: Section = Object.freeze({ parts: Object.freeze(parts.map(freezePart)) });
+  const frozen: Section = frozenCopy({ parts });
   // the frozen copy holds the same values, so its compiled form is the one just made
   if (valid) remember({ ...valid, section: frozen });
   return frozen;

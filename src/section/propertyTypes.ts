@@ -23,7 +23,7 @@ export interface SectionPropertiesOptions {
  *
  * @example
  * ```ts
- * const { major, minor, angle } = sectionProperties(angleSection).principal;
+ * const { major, minor, angle: tilt } = sectionProperties(angle({ verticalLeg: 100, horizontalLeg: 75, thickness: 8 })).principal;
  * ```
  */
 export interface PrincipalAxes {
@@ -84,7 +84,9 @@ export interface SectionModuli {
  *
  * @example
  * ```ts
- * const n = sectionProperties(flitchBeam).parts[1]?.modularRatio;
+ * const plate = translateSection(rectangle({ width: 10, depth: 20 }, { material: { elasticModulus: 200e3 } }), { y: 0, z: 30 });
+ * const timber = rectangle({ width: 50, depth: 20 }, { material: { elasticModulus: 10e3 } });
+ * sectionProperties(builtUp([timber, plate])).parts[1]?.modularRatio; // 20
  * ```
  */
 export interface PartProperties {
@@ -121,7 +123,7 @@ export interface RadiiOfGyration {
  *
  * @example
  * ```ts
- * const t = sectionProperties(flitchBeam, { referenceModulus: 11_000 }).transformed;
+ * const t = sectionProperties(rectangle({ width: 50, depth: 200 }, { material: { elasticModulus: 11_000 } }), { referenceModulus: 200_000 }).transformed;
  * ```
  */
 export interface TransformedInfo {

@@ -42,6 +42,7 @@ export function translatePart(part: SectionPart, by: SectionPoint): SectionPart 
  *
  * @example
  * ```ts
+ * const plate: SectionPart = { kind: "polygon", points: [{ y: 0, z: 0 }, { y: 0, z: 100 }, { y: 10, z: 100 }, { y: 10, z: 0 }] };
  * const upright = rotatePart(plate, Math.PI / 2);
  * ```
  */
@@ -64,7 +65,7 @@ export function rotatePart(part: SectionPart, angle: number, about: SectionPoint
  *
  * @example
  * ```ts
- * const otherSide = mirrorPart(fillet, "y");
+ * const otherSide = mirrorPart({ kind: "fillet", corner: { y: 90, z: 5 }, radius: 12, orientation: -Math.PI / 2 }, "y");
  * ```
  */
 export function mirrorPart(part: SectionPart, axis: MirrorAxis): SectionPart {

@@ -1,3 +1,4 @@
+import { attempt, type Result } from "../../errors/index.js";
 import { section } from "../construct.js";
 import type { Section, SectionPart } from "../types.js";
 import { box, checkDimensions, withExtras, type ShapeOptions } from "./dimensions.js";
@@ -45,9 +46,9 @@ export function angle(dims: AngleDimensions, options?: ShapeOptions): Section {
   const t = dims.thickness;
   const r = dims.rootRadius ?? 0;
   if (t >= Math.min(h, w)) {
-    found.add("thickness-too-large", ["thickness"], `The thickness (${t}) must be less than both legs (${Math.min(h, w)}).`, { thickness: t });
+    found.add("thickness-too-large", ["thickness"], `The thickness must be less than both legs.`, { thickness: t });
   } else if (r > Math.min(h, w) - t) {
-    found.add("root-radius-too-large", ["rootRadius"], `The root radius (${r}) must fit along both legs (at most ${Math.min(h, w) - t}).`, { rootRadius: r });
+    found.add("root-radius-too-large", ["rootRadius"], `The root radius must fit along both legs.`, { rootRadius: r });
   }
   found.throwIfAny();
   const m = options?.material;
@@ -56,4 +57,17 @@ export function angle(dims: AngleDimensions, options?: ShapeOptions): Section {
   const parts: SectionPart[] = [box(left, left + t, bottom, h / 2, m), box(left + t, w / 2, bottom, bottom + t, m)];
   if (r > 0) parts.push(withExtras({ kind: "fillet", corner: { y: bottom + t, z: left + t }, radius: r, orientation: 0 }, m));
   return section(parts);
+}
+
+/**
+ * The non-throwing form of {@link angle}.
+ *
+ * @example
+ * ```ts
+ * const r = tryAngle({ verticalLeg: 50, thickness: 60 });
+ * if (!r.ok) console.log(r.error.code); // "thickness-too-large"
+ * ```
+ */
+export function tryAngle(dims: AngleDimensions, options?: ShapeOptions): Result<Section> {
+  return attempt(() => angle(dims, options));
 }

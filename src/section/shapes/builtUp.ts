@@ -1,3 +1,4 @@
+import { attempt, type Result } from "../../errors/index.js";
 import { section } from "../construct.js";
 import type { Section, SectionPart } from "../types.js";
 
@@ -26,4 +27,17 @@ export function builtUp(pieces: readonly (Section | SectionPart)[]): Section {
     else parts.push(piece as SectionPart);
   }
   return section(parts);
+}
+
+/**
+ * The non-throwing form of {@link builtUp}.
+ *
+ * @example
+ * ```ts
+ * const r = tryBuiltUp([]);
+ * if (!r.ok) console.log(r.error.code); // "section-empty"
+ * ```
+ */
+export function tryBuiltUp(pieces: readonly (Section | SectionPart)[]): Result<Section> {
+  return attempt(() => builtUp(pieces));
 }

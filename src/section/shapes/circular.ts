@@ -1,3 +1,4 @@
+import { attempt, type Result } from "../../errors/index.js";
 import { section } from "../construct.js";
 import type { Section } from "../types.js";
 import { checkDimensions, withExtras, type ShapeOptions } from "./dimensions.js";
@@ -63,7 +64,7 @@ export function pipe(dims: PipeDimensions, options?: ShapeOptions): Section {
   const { found, ok } = checkDimensions(dims, ["outsideDiameter", "wallThickness"]);
   if (!ok) found.throwIfAny();
   if (dims.wallThickness * 2 >= dims.outsideDiameter) {
-    found.add("wall-too-thick", ["wallThickness"], `The wall (${dims.wallThickness}) must be thinner than half the outside diameter (${dims.outsideDiameter}); for a solid bar use circle().`, {
+    found.add("wall-too-thick", ["wallThickness"], `The wall must be thinner than half the diameter; for a solid bar use circle().`, {
       wallThickness: dims.wallThickness,
       outsideDiameter: dims.outsideDiameter,
     });
@@ -75,4 +76,30 @@ export function pipe(dims: PipeDimensions, options?: ShapeOptions): Section {
     withExtras({ kind: "circle", centre: { y: 0, z: 0 }, radius: r }, m),
     withExtras({ kind: "circle", centre: { y: 0, z: 0 }, radius: r - dims.wallThickness }, m, true),
   ]);
+}
+
+/**
+ * The non-throwing form of {@link circle}.
+ *
+ * @example
+ * ```ts
+ * const r = tryCircle({ diameter: 0 });
+ * if (!r.ok) console.log(r.error.code); // "dimension-not-positive"
+ * ```
+ */
+export function tryCircle(dims: CircleDimensions, options?: ShapeOptions): Result<Section> {
+  return attempt(() => circle(dims, options));
+}
+
+/**
+ * The non-throwing form of {@link pipe}.
+ *
+ * @example
+ * ```ts
+ * const r = tryPipe({ outsideDiameter: 10, wallThickness: 5 });
+ * if (!r.ok) console.log(r.error.code); // "wall-too-thick"
+ * ```
+ */
+export function tryPipe(dims: PipeDimensions, options?: ShapeOptions): Result<Section> {
+  return attempt(() => pipe(dims, options));
 }

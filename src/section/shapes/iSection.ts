@@ -1,3 +1,4 @@
+import { attempt, type Result } from "../../errors/index.js";
 import { section } from "../construct.js";
 import type { Material, Section, SectionPart } from "../types.js";
 import { box, checkDimensions, withExtras, type ShapeOptions } from "./dimensions.js";
@@ -78,13 +79,13 @@ export function iSection(dims: ISectionDimensions, options?: ShapeOptions): Sect
   const r = dims.rootRadius ?? 0;
   {
     if (tt + tb >= d) {
-      found.add("flange-too-thick", ["flangeThickness"], `The flanges (${tt} + ${tb}) must together be thinner than the depth (${d}).`, { flangeThickness: tt, bottomFlangeThickness: tb, depth: d });
+      found.add("flange-too-thick", ["flangeThickness"], `The flanges together must be thinner than the depth.`, { flangeThickness: tt, bottomFlangeThickness: tb, depth: d });
     }
     if (tw > Math.min(bt, bb)) {
-      found.add("web-too-thick", ["webThickness"], `The web (${tw}) must not be wider than the flanges (${Math.min(bt, bb)}).`, { webThickness: tw });
+      found.add("web-too-thick", ["webThickness"], `The web must not be wider than the flanges.`, { webThickness: tw });
     }
     if (found.empty && r > 0 && (tw + 2 * r > Math.min(bt, bb) || 2 * r > d - tt - tb)) {
-      found.add("root-radius-too-large", ["rootRadius"], `The root radius (${r}) must fit between the web and the flange tips and within the clear depth of the web.`, { rootRadius: r });
+      found.add("root-radius-too-large", ["rootRadius"], `The root radius must fit between web, flange tips and the other flange.`, { rootRadius: r });
     }
   }
   found.throwIfAny();
@@ -97,4 +98,17 @@ export function iSection(dims: ISectionDimensions, options?: ShapeOptions): Sect
     box(-bb / 2, bb / 2, bottom, bottom + tb, m),
     ...rootFillets(tw / 2, r, top - tt, bottom + tb, m),
   ]);
+}
+
+/**
+ * The non-throwing form of {@link iSection}.
+ *
+ * @example
+ * ```ts
+ * const r = tryISection({ depth: 20, flangeWidth: 100, flangeThickness: 10, webThickness: 6 });
+ * if (!r.ok) console.log(r.error.code); // "flange-too-thick"
+ * ```
+ */
+export function tryISection(dims: ISectionDimensions, options?: ShapeOptions): Result<Section> {
+  return attempt(() => iSection(dims, options));
 }

@@ -1,4 +1,4 @@
-import { IssueCollector } from "../../errors/index.js";
+import { IssueCollector, attempt, type Result } from "../../errors/index.js";
 import { section } from "../construct.js";
 import type { Section } from "../types.js";
 import { box, checkDimensions, type ShapeOptions } from "./dimensions.js";
@@ -65,7 +65,7 @@ export function plateGirder(dims: PlateGirderDimensions, options?: ShapeOptions)
   const web = dims.web;
   const bottom = dims.bottomFlange ?? top;
   if (web.thickness > Math.min(top.width, bottom.width)) {
-    found.add("web-too-thick", ["web", "thickness"], `The web (${web.thickness}) must not be wider than the flanges (${Math.min(top.width, bottom.width)}).`, { webThickness: web.thickness });
+    found.add("web-too-thick", ["web", "thickness"], `The web must not be wider than the flanges.`, { webThickness: web.thickness });
   }
   found.throwIfAny();
   const m = options?.material;
@@ -77,4 +77,17 @@ export function plateGirder(dims: PlateGirderDimensions, options?: ShapeOptions)
     box(-web.thickness / 2, web.thickness / 2, yBottom + bottom.thickness, yTop - top.thickness, m),
     box(-bottom.width / 2, bottom.width / 2, yBottom, yBottom + bottom.thickness, m),
   ]);
+}
+
+/**
+ * The non-throwing form of {@link plateGirder}.
+ *
+ * @example
+ * ```ts
+ * const r = tryPlateGirder({ topFlange: { width: 0, thickness: 30 }, web: { width: 1500, thickness: 12 } });
+ * if (!r.ok) console.log(r.error.code); // "dimension-not-positive"
+ * ```
+ */
+export function tryPlateGirder(dims: PlateGirderDimensions, options?: ShapeOptions): Result<Section> {
+  return attempt(() => plateGirder(dims, options));
 }

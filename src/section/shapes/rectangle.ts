@@ -1,3 +1,4 @@
+import { attempt, type Result } from "../../errors/index.js";
 import { section } from "../construct.js";
 import type { Section } from "../types.js";
 import { box, checkDimensions, type ShapeOptions } from "./dimensions.js";
@@ -35,4 +36,17 @@ export function rectangle(dims: RectangleDimensions, options?: ShapeOptions): Se
   found.throwIfAny();
   const { width: b, depth: d } = dims;
   return section([box(-b / 2, b / 2, -d / 2, d / 2, options?.material)]);
+}
+
+/**
+ * The non-throwing form of {@link rectangle}.
+ *
+ * @example
+ * ```ts
+ * const r = tryRectangle({ width: -1, depth: 200 });
+ * if (!r.ok) console.log(r.error.code); // "dimension-not-positive"
+ * ```
+ */
+export function tryRectangle(dims: RectangleDimensions, options?: ShapeOptions): Result<Section> {
+  return attempt(() => rectangle(dims, options));
 }

@@ -1,3 +1,4 @@
+import { attempt, type Result } from "../../errors/index.js";
 import { section } from "../construct.js";
 import type { Section } from "../types.js";
 import { cornerFillets } from "./corners.js";
@@ -46,12 +47,12 @@ export function rectangularHollow(dims: RectangularHollowDimensions, options?: S
   const ro = dims.cornerRadius ?? 0;
   const ri = dims.innerCornerRadius ?? Math.max(0, ro - t);
   if (2 * t >= Math.min(b, d)) {
-    found.add("wall-too-thick", ["wallThickness"], `The wall (${t}) must be thinner than half the width and half the depth (${Math.min(b, d) / 2}).`, { wallThickness: t });
+    found.add("wall-too-thick", ["wallThickness"], `The wall must be thinner than half the width and depth.`, { wallThickness: t });
   } else if (2 * ri > Math.min(b, d) - 2 * t) {
-    found.add("corner-radius-too-large", ["innerCornerRadius"], `The inside corner radius (${ri}) must be at most half the inside width and depth (${(Math.min(b, d) - 2 * t) / 2}).`, { innerCornerRadius: ri });
+    found.add("corner-radius-too-large", ["innerCornerRadius"], `The inside corner radius must be at most half the inside width and depth.`, { innerCornerRadius: ri });
   }
   if (2 * ro > Math.min(b, d)) {
-    found.add("corner-radius-too-large", ["cornerRadius"], `The outside corner radius (${ro}) must be at most half the width and depth (${Math.min(b, d) / 2}).`, { cornerRadius: ro });
+    found.add("corner-radius-too-large", ["cornerRadius"], `The corner radius must be at most half the width and depth.`, { cornerRadius: ro });
   }
   found.throwIfAny();
   const m = options?.material;
@@ -61,4 +62,17 @@ export function rectangularHollow(dims: RectangularHollowDimensions, options?: S
     box(-b / 2 + t, b / 2 - t, -d / 2 + t, d / 2 - t, m, true),
     ...cornerFillets(b / 2 - t, d / 2 - t, ri, m, false),
   ]);
+}
+
+/**
+ * The non-throwing form of {@link rectangularHollow}.
+ *
+ * @example
+ * ```ts
+ * const r = tryRectangularHollow({ width: 10, depth: 20, wallThickness: 5 });
+ * if (!r.ok) console.log(r.error.code); // "wall-too-thick"
+ * ```
+ */
+export function tryRectangularHollow(dims: RectangularHollowDimensions, options?: ShapeOptions): Result<Section> {
+  return attempt(() => rectangularHollow(dims, options));
 }

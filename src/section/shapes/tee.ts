@@ -1,3 +1,4 @@
+import { attempt, type Result } from "../../errors/index.js";
 import { section } from "../construct.js";
 import type { Section } from "../types.js";
 import { box, checkDimensions, type ShapeOptions } from "./dimensions.js";
@@ -45,13 +46,26 @@ export function tee(dims: TeeDimensions, options?: ShapeOptions): Section {
   const { depth: d, flangeWidth: b, flangeThickness: tf, webThickness: tw } = dims;
   const r = dims.rootRadius ?? 0;
   {
-    if (tf >= d) found.add("flange-too-thick", ["flangeThickness"], `The flange (${tf}) must be thinner than the depth (${d}).`, { flangeThickness: tf, depth: d });
-    if (tw > b) found.add("web-too-thick", ["webThickness"], `The stem (${tw}) must not be wider than the flange (${b}).`, { webThickness: tw });
+    if (tf >= d) found.add("flange-too-thick", ["flangeThickness"], `The flange must be thinner than the depth.`, { flangeThickness: tf, depth: d });
+    if (tw > b) found.add("web-too-thick", ["webThickness"], `The stem must not be wider than the flange.`, { webThickness: tw });
     if (found.empty && r > 0 && (tw + 2 * r > b || r > d - tf)) {
-      found.add("root-radius-too-large", ["rootRadius"], `The root radius (${r}) must fit between the stem and the flange tips and within the stem's length.`, { rootRadius: r });
+      found.add("root-radius-too-large", ["rootRadius"], `The root radius must fit between stem and flange tips, and along the stem.`, { rootRadius: r });
     }
   }
   found.throwIfAny();
   const m = options?.material;
   return section([box(-b / 2, b / 2, d / 2 - tf, d / 2, m), box(-tw / 2, tw / 2, -d / 2, d / 2 - tf, m), ...rootFillets(tw / 2, r, d / 2 - tf, undefined, m)]);
+}
+
+/**
+ * The non-throwing form of {@link tee}.
+ *
+ * @example
+ * ```ts
+ * const r = tryTee({ depth: 10, flangeWidth: 100, flangeThickness: 10, webThickness: 6 });
+ * if (!r.ok) console.log(r.error.code); // "flange-too-thick"
+ * ```
+ */
+export function tryTee(dims: TeeDimensions, options?: ShapeOptions): Result<Section> {
+  return attempt(() => tee(dims, options));
 }
