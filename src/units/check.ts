@@ -1,7 +1,7 @@
 import { describeValue, issue, type FlexuraIssue, type IssuePath } from "../errors/index.js";
 import { describeDimension, dimensionOfKind, fitsDimension, isQuantityKind, quantityKinds, type QuantityKind } from "./kinds.js";
 import type { UnitFactor } from "./unit.js";
-import { KIND_EXAMPLES, KIND_WORDS } from "./words.js";
+import { KIND_WORDS, kindExamples } from "./words.js";
 
 /** An issue (at `path` + `"kind"`) when `kind` is not a {@link QuantityKind}, else undefined. */
 export function checkKind(kind: unknown, path: IssuePath): FlexuraIssue | undefined {
@@ -16,7 +16,7 @@ export function checkFits(unit: UnitFactor, kind: QuantityKind, path: IssuePath,
   if (fitsDimension(unit.dimension, dimensionOfKind(kind))) return undefined;
   const found = unit.kinds[0];
   const is = found === undefined ? `has dimension ${describeDimension(unit.dimension)}` : `is ${KIND_WORDS[found]}`;
-  const advice = kind === "dimensionless" ? "give the number alone" : `use a unit such as ${KIND_EXAMPLES[kind]}`;
+  const advice = kind === "dimensionless" ? "give the number alone" : `use a unit such as ${kindExamples(kind)}`;
   return issue("wrong-dimension", path, `${shown()} ${is}, but ${KIND_WORDS[kind]} is due here; ${advice}.`, {
     unit: unit.unit,
     expected: kind,

@@ -4,7 +4,7 @@ import { dimensionOfKind, fitsDimension, isQuantityKind, type QuantityKind } fro
 import { readLeadingNumber } from "./number.js";
 import { rescale } from "./scale.js";
 import { resolveUnit, type UnitFactor } from "./unit.js";
-import { KIND_EXAMPLES, KIND_WORDS } from "./words.js";
+import { KIND_WORDS, kindExamples } from "./words.js";
 
 /**
  * A quantity read from text such as `"1.5 kip/ft"`.
@@ -63,7 +63,7 @@ export function readQuantity(text: unknown, kind: unknown, path: IssuePath, foun
   let unit: UnitFactor | undefined;
   if (unitText === "") {
     if (isQuantityKind(kind) && !fitsDimension({ length: 0, force: 0, angle: 0 }, dimensionOfKind(kind))) {
-      found.push(issue("unit-missing", path, `${JSON.stringify(text)} has no unit; ${KIND_WORDS[kind]} is due here, so add a unit such as ${KIND_EXAMPLES[kind]}.`, { text, expected: kind }));
+      found.push(issue("unit-missing", path, `${JSON.stringify(text)} has no unit; ${KIND_WORDS[kind]} is due here, so add a unit such as ${kindExamples(kind)}.`, { text, expected: kind }));
       return undefined;
     }
   } else {

@@ -18,8 +18,6 @@ export interface UnitSystem {
   readonly kind: "unit-system";
   /** The preset's name, the same as its key in {@link unitSystems}. */
   readonly name: UnitSystemName;
-  /** A short description. */
-  readonly title: string;
   /** Unit for member lengths and positions along the member. */
   readonly length: string;
   /** Unit for forces (point loads, reactions, shear). */
@@ -80,7 +78,6 @@ const system = (s: Omit<UnitSystem, "kind" | "rotation" | "dimensionless">): Uni
 export const unitSystems: Readonly<Record<UnitSystemName, UnitSystem>> = Object.freeze({
   siNewtonMetre: system({
     name: "siNewtonMetre",
-    title: "SI base units: N and m",
     length: "m",
     force: "N",
     moment: "N*m",
@@ -97,7 +94,6 @@ export const unitSystems: Readonly<Record<UnitSystemName, UnitSystem>> = Object.
   }),
   siKilonewtonMetre: system({
     name: "siKilonewtonMetre",
-    title: "SI with kN and m; stress in MPa, section properties in mm",
     length: "m",
     force: "kN",
     moment: "kN*m",
@@ -114,7 +110,6 @@ export const unitSystems: Readonly<Record<UnitSystemName, UnitSystem>> = Object.
   }),
   siNewtonMillimetre: system({
     name: "siNewtonMillimetre",
-    title: "SI with N and mm; stress in MPa (N/mm^2)",
     length: "mm",
     force: "N",
     moment: "N*mm",
@@ -131,7 +126,6 @@ export const unitSystems: Readonly<Record<UnitSystemName, UnitSystem>> = Object.
   }),
   usKipFoot: system({
     name: "usKipFoot",
-    title: "US customary with kip and ft; stress in ksi, section properties in in",
     length: "ft",
     force: "kip",
     moment: "kip*ft",
@@ -148,7 +142,6 @@ export const unitSystems: Readonly<Record<UnitSystemName, UnitSystem>> = Object.
   }),
   usKipInch: system({
     name: "usKipInch",
-    title: "US customary with kip and in; stress in ksi",
     length: "in",
     force: "kip",
     moment: "kip*in",

@@ -118,7 +118,7 @@ describe("bad input gives typed errors", () => {
         {
           "code": "unit-missing",
           "expected": "force",
-          "message": ""12" has no unit; a force is due here, so add a unit such as N, kN, lbf or kip.",
+          "message": ""12" has no unit; a force is due here, so add a unit such as N, kN or kip.",
           "path": [],
           "text": "12",
         },
@@ -390,19 +390,17 @@ describe("bad input gives typed errors", () => {
         },
       ]
     `);
-    expect(bad("12 kpi")).toMatchInlineSnapshot(`
+    expect(bad("12 kipf")).toMatchInlineSnapshot(`
       [
         {
           "code": "unknown-unit",
-          "message": "Unknown unit "kpi". Did you mean "kip" or "kPa" or "ksi"?",
+          "message": "Unknown unit "kipf". Did you mean "kip"?",
           "path": [],
           "suggestions": [
             "kip",
-            "kPa",
-            "ksi",
           ],
-          "token": "kpi",
-          "unit": "kpi",
+          "token": "kipf",
+          "unit": "kipf",
         },
       ]
     `);
@@ -438,7 +436,7 @@ describe("bad input gives typed errors", () => {
           "found": [
             "length",
           ],
-          "message": ""5 mm" is a length, but a force is due here; use a unit such as N, kN, lbf or kip.",
+          "message": ""5 mm" is a length, but a force is due here; use a unit such as N, kN or kip.",
           "path": [],
           "unit": "mm",
         },
@@ -453,7 +451,7 @@ describe("bad input gives typed errors", () => {
           "found": [
             "rotationalStiffness",
           ],
-          "message": ""5 kN*m/rad" is a rotational stiffness, but a moment is due here; use a unit such as kN*m, N*mm, kip*ft or kip*in.",
+          "message": ""5 kN*m/rad" is a rotational stiffness, but a moment is due here; use a unit such as N*m, kN*m, N*mm, kip*ft or kip*in.",
           "path": [],
           "unit": "kN*m/rad",
         },
@@ -466,7 +464,7 @@ describe("bad input gives typed errors", () => {
           "dimension": "length^7",
           "expected": "length",
           "found": [],
-          "message": ""5 m^7" has dimension length^7, but a length is due here; use a unit such as m, mm, in or ft.",
+          "message": ""5 m^7" has dimension length^7, but a length is due here; use a unit such as m, mm, ft or in.",
           "path": [],
           "unit": "m^7",
         },
@@ -624,7 +622,7 @@ describe("bad input gives typed errors", () => {
           "found": [
             "length",
           ],
-          "message": "The unit "mm" is a length, but a force is due here; use a unit such as N, kN, lbf or kip.",
+          "message": "The unit "mm" is a length, but a force is due here; use a unit such as N, kN or kip.",
           "path": [
             "toUnit",
           ],
@@ -641,7 +639,7 @@ describe("bad input gives typed errors", () => {
           "found": [
             "length",
           ],
-          "message": "The unit "mm" is a length, but a force is due here; use a unit such as N, kN, lbf or kip.",
+          "message": "The unit "mm" is a length, but a force is due here; use a unit such as N, kN or kip.",
           "path": [
             "toUnit",
           ],
