@@ -8,10 +8,14 @@
  */
 export * from "./errors/index.js";
 export * from "./units/index.js";
-export * from "./math/index.js";
-export * from "./loads/index.js";
-export * from "./supports/index.js";
+// The beam engine, its input and result types, and the evaluators a caller needs to read a
+// solution. The rest of the piecewise-polynomial toolkit and the load builders are served from
+// `flexura/beam`, to keep the main entry within its size budget (scripts/size-check.mjs).
 export * from "./beam/index.js";
+export type { PiecewisePolynomial, PiecewiseSide, PolynomialPiece, LocatedValue, Extremes, BandedFactorReport } from "./math/index.js";
+export { evaluatePiecewise, evaluatePiecewiseMany, extremesOf } from "./math/index.js";
+export type { PointLoad, CoupleLoad, DistributedLoad, Load, LoadResultant } from "./loads/index.js";
+export type { Support, SupportKind } from "./supports/index.js";
 export * from "./section/index.js";
 export * from "./stress/index.js";
 // The member checks are served from `flexura/check` only: re-exporting them here would put the

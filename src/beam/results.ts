@@ -1,6 +1,7 @@
 import { evaluatePolynomial, polynomialRootsIn, type PiecewisePolynomial } from "../math/index.js";
 import { restrainsDeflection, type Support } from "../supports/index.js";
 import type { BeamModel } from "./model.js";
+import type { StiffnessResult } from "./stiffness.js";
 import type { BeamSpan, BeamWarning } from "./types.js";
 
 /**
@@ -99,7 +100,7 @@ export function conditioningWarnings(model: BeamModel, supports: readonly Suppor
         );
     }
   }
-  if (pivotRatio < 1e-9)
+  if (pivotRatio < 1e-8)
     out.push(
       Object.freeze({
         code: "ill-conditioned",
@@ -108,4 +109,75 @@ export function conditioningWarnings(model: BeamModel, supports: readonly Suppor
       }),
     );
   return out;
+}
+
+/**
+ * A posteriori check of the solve: the out-of-balance force and moment at every node (what the
+ * solution leaves unresolved, springs included) relative to the size of the loading. A large
+ * value means float64 could not resolve the member (very soft parts next to very stiff short
+ * elements) and the results carry that relative error.
+ */
+export function balanceWarnings(model: BeamModel, result: StiffnessResult, supports: readonly Support[]): BeamWarning[] {
+  const n = model.nodes;
+  const q = result.endForces;
+  const d = result.displacements;
+  const length = (model.x[n - 1] as number) - (model.x[0] as number);
+  const rigid = new Uint8Array(2 * n);
+  const springV = new Float64Array(n);
+  const springR = new Float64Array(n);
+  for (let s = 0; s < supports.length; s++) {
+    const sup = supports[s] as Support;
+    const node = model.supportNode[s] as number;
+    switch (sup.kind) {
+      case "pin":
+      case "roller":
+        rigid[2 * node] = 1;
+        break;
+      case "fixed":
+        rigid[2 * node] = 1;
+        rigid[2 * node + 1] = 1;
+        break;
+      case "guided":
+        rigid[2 * node + 1] = 1;
+        break;
+      case "spring":
+        if (sup.stiffness !== undefined) springV[node] = -sup.stiffness * ((d[2 * node] as number) + (sup.settlement ?? 0));
+        if (sup.rotationalStiffness !== undefined) springR[node] = -sup.rotationalStiffness * ((d[2 * node + 1] as number) - (sup.rotation ?? 0));
+        break;
+      default:
+        return sup.kind satisfies never;
+    }
+  }
+  let scale = 0;
+  let worstForce = 0;
+  let worstMoment = 0;
+  for (let i = 0; i < n; i++) {
+    let f = model.force[i] as number;
+    let m = -(model.couple[i] as number);
+    scale += Math.abs(f) + Math.abs(m) / length;
+    if (i > 0) {
+      f += q[4 * (i - 1) + 2] as number;
+      m += q[4 * (i - 1) + 3] as number;
+    }
+    if (i < n - 1) {
+      f += q[4 * i] as number;
+      m += q[4 * i + 1] as number;
+      const h = (model.x[i + 1] as number) - (model.x[i] as number);
+      scale += 0.5 * (Math.abs(model.wLeft[i] as number) + Math.abs(model.wRight[i] as number)) * h;
+    }
+    if (rigid[2 * i] === 1) scale += Math.abs(f);
+    else worstForce = Math.max(worstForce, Math.abs(f - (springV[i] as number)));
+    if (rigid[2 * i + 1] === 1) scale += Math.abs(m) / length;
+    else worstMoment = Math.max(worstMoment, Math.abs(m - (springR[i] as number)));
+    scale += Math.abs(springV[i] as number) + Math.abs(springR[i] as number) / length;
+  }
+  const worst = Math.max(worstForce, worstMoment / length);
+  if (!(worst > 1e-10 * scale)) return [];
+  return [
+    Object.freeze({
+      code: "ill-conditioned",
+      message: `Float64 could not balance every node to rounding: up to ${(worst / scale).toExponential(1)} of the load is out of balance, so results carry about that relative error. Very soft springs or parts next to short, stiff elements cause this.`,
+      imbalance: worst / scale,
+    }),
+  ];
 }

@@ -3,7 +3,7 @@ import { loadResultant } from "../loads/index.js";
 import { extremesOf } from "../math/index.js";
 import { buildModel } from "./model.js";
 import { recoverDiagrams, recoverReactions } from "./recover.js";
-import { conditioningWarnings, contraflexurePoints, spansOf } from "./results.js";
+import { balanceWarnings, conditioningWarnings, contraflexurePoints, spansOf } from "./results.js";
 import { checkStability } from "./stability.js";
 import { solveStiffness } from "./stiffness.js";
 import type { BeamInput, BeamSolution, SolveOptions } from "./types.js";
@@ -70,7 +70,7 @@ export function solveBeam(beam: BeamInput, options?: SolveOptions): BeamSolution
     peaks: Object.freeze(peaks),
     contraflexure: Object.freeze(contraflexurePoints(diagrams.moment, scale)),
     residual: Object.freeze({ force, moment }),
-    warnings: Object.freeze(conditioningWarnings(model, beam.supports, result.pivotRatio)),
+    warnings: Object.freeze([...conditioningWarnings(model, beam.supports, result.pivotRatio), ...balanceWarnings(model, result, beam.supports)]),
     spans: Object.freeze(spansOf(beam.length, beam.supports)),
   });
 }

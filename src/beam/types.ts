@@ -37,9 +37,9 @@ export interface BeamInput {
   /** The supports, at distinct points. A free end is an end without a support. */
   readonly supports: readonly Support[];
   /**
-   * Internal hinges (moment releases) at these positions, strictly inside the member. A support
-   * at a hinge holds deflection for both sides; a rotational restraint there holds the part to the
-   * right of the hinge.
+   * Internal hinges (moment releases) at these positions, strictly inside the member. A pin,
+   * roller or translational spring at a hinge holds the deflection of both sides; a support that
+   * holds rotation, or a couple, exactly at a hinge is ambiguous and rejected.
    */
   readonly hinges?: readonly number[];
   /** The loads; none is valid and gives zero results. */

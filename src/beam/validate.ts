@@ -1,7 +1,8 @@
 import { IssueCollector, describeValue, requireFinite } from "../errors/index.js";
 import { validateLoads } from "../loads/index.js";
 import { validateSupports } from "../supports/index.js";
-import type { SolveOptions } from "./types.js";
+import { restrainsRotation } from "../supports/index.js";
+import type { BeamInput, SolveOptions } from "./types.js";
 
 /** Positions closer than this (relative to the length) are the same point of the member. */
 export const SAME_POINT = 1e-10;
@@ -111,5 +112,34 @@ export function validateBeam(beam: unknown, options: SolveOptions | undefined): 
     if (typeof factors !== "object" || factors === null) found.add("not-an-object", ["factors"], `The factors must map case names to numbers; got ${describeValue(factors)}.`);
     else for (const [name, value] of Object.entries(factors)) requireFinite(found, value, ["factors", name], `factor of load case "${name}"`);
   }
+  if (found.empty) checkHingeNeighbours(beam as unknown as BeamInput, found);
   found.throwIfAny();
+}
+
+/**
+ * A rotational restraint or a couple exactly at a hinge is ambiguous (which side does it act
+ * on?): ask for it to be placed to one side.
+ */
+function checkHingeNeighbours(beam: BeamInput, found: IssueCollector): void {
+  const hinges = [...(beam.hinges ?? [])].sort((a, b) => a - b);
+  if (hinges.length === 0) return;
+  const tol = SAME_POINT * beam.length;
+  const atHinge = (x: number): boolean => {
+    let lo = 0;
+    let hi = hinges.length - 1;
+    while (lo < hi) {
+      const mid = (lo + hi) >> 1;
+      if ((hinges[mid] as number) < x - tol) lo = mid + 1;
+      else hi = mid;
+    }
+    return Math.abs((hinges[lo] as number) - x) <= tol;
+  };
+  beam.supports.forEach((s, i) => {
+    if (restrainsRotation(s) && atHinge(s.at))
+      found.add("hinge-at-rotational-support", ["supports", i, "at"], `The ${s.kind} support at x = ${s.at} holds rotation at a hinge, so it is unclear which side it holds: move the hinge or the support slightly to one side.`, { at: s.at });
+  });
+  (beam.loads ?? []).forEach((l, i) => {
+    if (l.kind === "couple" && atHinge(l.at))
+      found.add("couple-at-hinge", ["loads", i, "at"], `The couple at x = ${l.at} sits on a hinge, so it is unclear which side it turns: move it slightly to one side.`, { at: l.at });
+  });
 }

@@ -206,6 +206,7 @@ describe("solveBeam(mechanism)", () => {
   it("stable hinged members solve: a hinge over a support, and a hinge next to a fixed end", () => {
     expect(mech({ length: 8, stiffness: 1, hinges: [4], supports: [{ kind: "pin", at: 0 }, { kind: "roller", at: 4 }, { kind: "roller", at: 8 }] })).toBeUndefined();
     expect(mech({ length: 8, stiffness: 1, hinges: [4], supports: [{ kind: "fixed", at: 0 }, { kind: "spring", at: 8, stiffness: 10 }] })).toBeUndefined();
-    expect(mech({ length: 8, stiffness: 1, hinges: [4], supports: [{ kind: "pin", at: 0 }, { kind: "fixed", at: 4 }] })).toBeUndefined();
+    expect(mech({ length: 8, stiffness: 1, hinges: [4], supports: [{ kind: "pin", at: 0 }, { kind: "roller", at: 4 }, { kind: "fixed", at: 8 }] })).toBeUndefined();
+    expect(mech({ length: 8, stiffness: 1, hinges: [4], supports: [{ kind: "pin", at: 0 }, { kind: "fixed", at: 4 }] })?.code).toBe("hinge-at-rotational-support");
   });
 });
