@@ -1,58 +1,13 @@
 // `npm run bench:targets`: the performance targets, measured in one run, printed as a table
 // against each target (docs/performance.md quotes it). Medians from mitata (p50).
 import { bench, runAll } from "./harness.js";
-import { solveBeam, evaluatePiecewiseMany, type BeamInput, type Load, type Support } from "../src/beam/entry.js";
+import { solveBeam, evaluatePiecewiseMany, type BeamInput } from "../src/beam/entry.js";
+import { continuous, simpleSpan as sixLoads, threeSpans } from "./fixtures.js";
 import { section, sectionProperties, plasticProperties, type SectionPart } from "../src/section/index.js";
 import { elementDeflectionAt, solveByDenseElements } from "./reference/dense-elements.js";
 
-// --- members -------------------------------------------------------------------------------
+// --- the member of the element comparison -----------------------------------------------
 const EI = 2.1e11 * 8.36e-5; // N*m^2, an invented steel member
-
-/** A simple span with six mixed loads: point, couple, partial trapezoidal. */
-export const sixLoads: BeamInput = {
-  length: 8,
-  stiffness: EI,
-  supports: [
-    { kind: "pin", at: 0 },
-    { kind: "roller", at: 8 },
-  ],
-  loads: [
-    { kind: "point", at: 1.5, value: 12e3 },
-    { kind: "point", at: 5.2, value: 8e3 },
-    { kind: "couple", at: 3.1, value: 4e3 },
-    { kind: "distributed", from: 0, to: 8, start: 2e3, end: 2e3 },
-    { kind: "distributed", from: 2, to: 6.5, start: 1e3, end: 4e3 },
-    { kind: "distributed", from: 6, to: 7.5, start: 5e3, end: 0 },
-  ],
-};
-
-/** Three continuous spans with ten loads. */
-export const threeSpans: BeamInput = {
-  length: 18,
-  stiffness: EI,
-  supports: [0, 6, 12, 18].map((at, i): Support => ({ kind: i === 0 ? "pin" : "roller", at })),
-  loads: [
-    { kind: "distributed", from: 0, to: 18, start: 1.5e3, end: 1.5e3 },
-    { kind: "point", at: 2, value: 10e3 },
-    { kind: "point", at: 4.5, value: 6e3 },
-    { kind: "point", at: 8, value: 9e3 },
-    { kind: "point", at: 14, value: 11e3 },
-    { kind: "couple", at: 9.5, value: 3e3 },
-    { kind: "couple", at: 16, value: -2e3 },
-    { kind: "distributed", from: 6.5, to: 11, start: 2e3, end: 5e3 },
-    { kind: "distributed", from: 12.5, to: 17, start: 4e3, end: 1e3 },
-    { kind: "distributed", from: 1, to: 3, start: 3e3, end: 3e3 },
-  ],
-};
-
-/** A continuous member of `spans` equal spans with a point load in each span. */
-export function continuous(spans: number): BeamInput {
-  const supports: Support[] = [];
-  const loads: Load[] = [];
-  for (let i = 0; i <= spans; i++) supports.push({ kind: i === 0 ? "pin" : "roller", at: 4 * i });
-  for (let i = 0; i < spans; i++) loads.push({ kind: "point", at: 4 * i + 1.3 + (i % 3) * 0.5, value: 5e3 + 100 * (i % 7) });
-  return { length: 4 * spans, stiffness: EI, supports, loads };
-}
 
 // --- section ---------------------------------------------------------------------------------
 const rect = (z0: number, y0: number, z1: number, y1: number, hole = false): SectionPart => ({
@@ -83,7 +38,7 @@ export const tenParts = section(tenPartParts);
 // --- registration ------------------------------------------------------------------------------
 const xs = new Float64Array(1_000_000);
 const solvedThree = solveBeam(threeSpans);
-for (let i = 0; i < xs.length; i++) xs[i] = (18 * i) / (xs.length - 1);
+for (let i = 0; i < xs.length; i++) xs[i] = (threeSpans.length * i) / (xs.length - 1);
 const out = new Float64Array(xs.length);
 
 bench("target 1: simple span, six mixed loads, reactions and peaks", () => solveBeam(sixLoads).peaks);
