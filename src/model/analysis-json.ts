@@ -1,6 +1,5 @@
-import type { ModelAnalysis, ModelCheck, ModelDiagrams, ModelPeaks, ModelReaction, ModelSectionResult, ModelStress, ModelWarning } from "./analysis.js";
+import type { ModelAnalysis, ModelResults } from "./analysis.js";
 import type { ModelFile } from "./file.js";
-import type { ModelUnits } from "./model.js";
 import { MODEL_FORMAT_VERSION } from "./model.js";
 import { modelToJson } from "./to-json.js";
 
@@ -9,37 +8,13 @@ import { modelToJson } from "./to-json.js";
  * results, value for value, as plain data, with the model echoed as a model file. Everything is
  * in the model's units, named in `units`.
  */
-export interface ModelAnalysisJson {
+export interface ModelAnalysisJson extends ModelResults {
   /** The model-file format version the results belong to. */
   readonly format: number;
   /** The model's name, when it has one. */
   readonly name?: string;
-  /** The units of every value. */
-  readonly units: ModelUnits;
   /** The model analysed, as a model file with every unit named. */
   readonly model: ModelFile;
-  /** Reactions, as in {@link ModelAnalysis.reactions}. */
-  readonly reactions: readonly ModelReaction[];
-  /** Shear peaks (force unit). */
-  readonly shear: ModelPeaks;
-  /** Moment peaks (moment unit). */
-  readonly moment: ModelPeaks;
-  /** Slope peaks (rotation unit). */
-  readonly slope: ModelPeaks;
-  /** Deflection peaks (deflection unit). */
-  readonly deflection: ModelPeaks;
-  /** Section properties, when the model has a section. */
-  readonly section?: ModelSectionResult;
-  /** Extreme stresses, when the model has a section. */
-  readonly stress?: ModelStress;
-  /** Checks against the limits. */
-  readonly checks: readonly ModelCheck[];
-  /** True when every check passes. */
-  readonly pass: boolean;
-  /** Cautions. */
-  readonly warnings: readonly ModelWarning[];
-  /** Diagrams as exact polynomial pieces. */
-  readonly diagrams: ModelDiagrams;
 }
 
 /**

@@ -157,14 +157,12 @@ export interface ModelWarning {
  */
 export type ModelScale = { readonly [K in keyof ModelUnits]: number };
 
-/** Everything `analyzeModel` found, in the model's units. */
-export interface ModelAnalysis {
-  /** The model that was analysed. */
-  readonly model: Model;
+/**
+ * The results an analysis and its JSON form share, value for value, in the model's units.
+ */
+export interface ModelResults {
   /** The units of every value below. */
   readonly units: ModelUnits;
-  /** SI base units per model unit, for each kind of quantity. */
-  readonly scale: ModelScale;
   /** Reactions, in the order of `model.supports`. */
   readonly reactions: readonly ModelReaction[];
   /** Shear force peaks, in the force unit. */
@@ -187,6 +185,14 @@ export interface ModelAnalysis {
   readonly diagrams: ModelDiagrams;
   /** Cautions about the model or its results. */
   readonly warnings: readonly ModelWarning[];
+}
+
+/** Everything `analyzeModel` found, in the model's units. */
+export interface ModelAnalysis extends ModelResults {
+  /** The model that was analysed. */
+  readonly model: Model;
+  /** SI base units per model unit, for each kind of quantity. */
+  readonly scale: ModelScale;
   /**
    * The solver's own result, in SI base units (m, N, N*m, rad): `value / scale[kind]` gives model
    * units. Not part of the JSON form. Always set by `analyzeModel`; optional so that an analysis

@@ -16,6 +16,7 @@ export type {
 export { MODEL_FORMAT_VERSION } from "./model.js";
 export type {
   ModelAnalysis,
+  ModelResults,
   ModelExtreme,
   ModelPeaks,
   ModelReaction,
