@@ -7,12 +7,13 @@ import { describe, it, expect } from "vitest";
 import { fc, test } from "@fast-check/vitest";
 import { solveBeam, type BeamInput } from "../../src/beam/index.js";
 import { nodeIndex } from "../../src/beam/model.js";
+import type { Load } from "../../src/loads/index.js";
 import { evaluatePiecewise } from "../../src/math/index.js";
 import { arbMember, samplePoints } from "./arbitraries.js";
 import { near } from "./helpers.js";
 
 const EI = 3.5e4; // kN m^2, invented
-const fixedFixed = (length: number, loads: BeamInput["loads"]): BeamInput => ({
+const fixedFixed = (length: number, loads: readonly Load[]): BeamInput => ({
   length,
   stiffness: EI,
   supports: [
