@@ -24,7 +24,10 @@ const shapes = fc.oneof(
 );
 
 const limits = fc.record({
-  deflection: fc.oneof(fc.integer({ min: 100, max: 600 }).map((n) => ({ file: `span/${n}`, si: { kind: "ratio", ratio: n, cantileverFactor: 1 } as DeflectionLimit })), fc.integer({ min: 1, max: 60 }).map((mm) => ({ file: `${mm} mm`, si: { kind: "absolute", limit: mm / 1000 } as DeflectionLimit }))),
+  deflection: fc.oneof(
+    fc.integer({ min: 100, max: 600 }).map((n): { file: string; si: DeflectionLimit } => ({ file: `span/${n}`, si: { kind: "ratio", ratio: n, cantileverFactor: 1 } })),
+    fc.integer({ min: 1, max: 60 }).map((mm): { file: string; si: DeflectionLimit } => ({ file: `${mm} mm`, si: { kind: "absolute", limit: mm / 1000 } })),
+  ),
   bendingStress: fc.integer({ min: 1, max: 400 }), // MPa
   shearStress: fc.integer({ min: 1, max: 200 }), // MPa
 });
