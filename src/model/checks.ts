@@ -97,16 +97,16 @@ function inModelUnits(c: CheckResult, model: Model, scale: ModelScale, context: 
   }
 }
 
-function extremeOf(p: PeakBendingStress, scale: ModelScale): ModelStressExtreme {
-  return { value: p.stress / scale.stress, at: p.x / scale.length, y: p.y / scale.sectionLength, ...(p.part < 0 ? {} : { part: p.part }) };
+function extremeOf(p: PeakBendingStress, scale: ModelScale, multiMaterial: boolean): ModelStressExtreme {
+  return { value: p.stress / scale.stress, at: p.x / scale.length, y: p.y / scale.sectionLength, ...(multiMaterial && p.part >= 0 ? { part: p.part } : {}) };
 }
 
-function stressOf(r: MemberCheck, scale: ModelScale): ModelStress {
+function stressOf(r: MemberCheck, scale: ModelScale, multiMaterial: boolean): ModelStress {
   const s = r.stresses;
   const v = s.shear;
   return {
-    tension: extremeOf(s.tension, scale),
-    compression: extremeOf(s.compression, scale),
+    tension: extremeOf(s.tension, scale, multiMaterial),
+    compression: extremeOf(s.compression, scale, multiMaterial),
     ...(v === null || v.shear === 0 ? {} : { shear: { value: v.stress / scale.stress, at: v.x / scale.length, y: v.y / scale.sectionLength } }),
   };
 }
@@ -120,10 +120,12 @@ function withSection(model: Model, solution: BeamSolution, section: SectionInSI,
     if (!isFlexuraError(e)) throw e;
     throw new FlexuraError(e.issues.map((i) => ({ ...i, path: i.path[0] === "limits" ? i.path : ["section"] })));
   }
-  const peaks = [r.stresses.tension, r.stresses.compression];
+  const multiMaterial = section.referenceModulus !== undefined;
+  const peaks = multiMaterial ? [r.stresses.tension, r.stresses.compression] : undefined;
   // Deflection checks first, then stresses: the order the model's results have always had.
   const ordered = [...r.checks.filter((c) => c.check === "deflection"), ...r.checks.filter((c) => c.check !== "deflection")];
-  return { checks: ordered.map((c) => inModelUnits(c, model, scale, { deflections: r.deflections, peaks })), stress: stressOf(r, scale) };
+  const context = { deflections: r.deflections, ...(peaks === undefined ? {} : { peaks }) };
+  return { checks: ordered.map((c) => inModelUnits(c, model, scale, context)), stress: stressOf(r, scale, multiMaterial) };
 }
 
 /**
