@@ -3,7 +3,7 @@
 import type { SchemaNode } from "./schema-parts.js";
 
 const length = (description: string): SchemaNode => ({ $ref: "#/$defs/sectionLength", description: `${description} (section-length unit)` });
-const angle = (description: string): SchemaNode => ({ $ref: "#/$defs/rotation", description: `${description} (rotation unit; a string such as "90 deg" works too)` });
+const angle = (description: string): SchemaNode => ({ $ref: "#/$defs/rotation", description: `${description} (rotation unit, radians by default)` });
 
 /** The JSON `type` tags of the parts of a built-up section, in the order documented. */
 export const SECTION_PART_TYPES = ["polygon", "circle", "sector", "fillet"] as const;
