@@ -72,7 +72,7 @@ function readPart(reader: Reader, value: unknown, path: IssuePath): ModelSection
   switch (p["type"]) {
     case "polygon": {
       const points = arrayAt(p["points"]).map((q, i) => readPoint(reader, q, [...path, "points", i]));
-      return points.every((q) => q !== undefined) ? { kind: "polygon", points: points as ModelSectionPoint[], ...common } : undefined;
+      return points.every((q) => q !== undefined) ? { kind: "polygon", points: points, ...common } : undefined;
     }
     case "circle": {
       const [centre, r] = [centreOf("centre"), radius()];
@@ -94,7 +94,7 @@ function readPart(reader: Reader, value: unknown, path: IssuePath): ModelSection
 
 function readBuiltUp(reader: Reader, s: Json): ModelSection | undefined {
   const parts = arrayAt(s["parts"]).map((p, i) => readPart(reader, p, ["section", "parts", i]));
-  return parts.length > 0 && parts.every((p) => p !== undefined) ? { shape: "built-up", parts: parts as ModelSectionPart[] } : undefined;
+  return parts.length > 0 && parts.every((p) => p !== undefined) ? { shape: "built-up", parts: parts } : undefined;
 }
 
 /**
