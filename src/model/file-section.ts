@@ -63,6 +63,8 @@ interface ModelFilePartCommon {
   readonly material?: ModelFileMaterial;
   /** Its modular ratio to the model's material, instead of `material`. */
   readonly modularRatio?: number;
+  /** Allowable bending stress in this part. */
+  readonly bendingStress?: ModelQuantity;
 }
 
 /** A part of a built-up section as written in a model file (angles in the rotation unit or with units). */

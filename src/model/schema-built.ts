@@ -51,6 +51,10 @@ const common = {
   hole: { type: "boolean", description: "True for a hole, taken away from the solid it lies in. Default false." },
   material: { $ref: "#/$defs/material", description: "The part's own material, when it differs from the model's." },
   modularRatio: { type: "number", description: "n = E of this part / E of the model's material, instead of `material`." },
+  bendingStress: {
+    $ref: "#/$defs/stress",
+    description: "Allowable bending stress in this part (stress unit), for a section of several materials. Parts of the model's material default to `limits.bendingStress`.",
+  },
 } as const;
 
 /** A part may give its own `material` or a `modularRatio`, not both. */

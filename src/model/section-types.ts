@@ -60,6 +60,12 @@ interface ModelPartCommon {
   readonly material?: ModelMaterial;
   /** The part's modular ratio n = E_part / E of the model's material, when given instead of `material`. */
   readonly modularRatio?: number;
+  /**
+   * Allowable bending stress in this part (stress unit), checked against its own peak stress
+   * n M y / I_z in a section of several materials; parts of the model's material default to
+   * `limits.bendingStress`.
+   */
+  readonly bendingStress?: number;
 }
 
 /** A simple polygon, corners in order (either winding), in the section-length unit. */

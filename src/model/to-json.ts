@@ -10,6 +10,7 @@ function partToJson(p: ModelSectionPart): ModelFileSectionPart {
     ...(p.hole ? { hole: true } : {}),
     ...(p.material === undefined ? {} : { material: materialToJson(p.material) }),
     ...(p.modularRatio === undefined ? {} : { modularRatio: p.modularRatio }),
+    ...(p.bendingStress === undefined ? {} : { bendingStress: p.bendingStress }),
   };
   switch (p.kind) {
     case "polygon":

@@ -179,8 +179,22 @@ describe("built-up sections", () => {
     const byRatio = si(flitch({ modularRatio: n }), timber);
     within(byRatio.section!.secondMomentZ, It, 1e-12);
     within(byRatio.stress!.tension.value, a.stress!.tension.value, 1e-12);
-    const checked = si(flitch({ material: { E: "200 GPa" } }), { ...timber, limits: { bendingStress: 100 } });
-    expect(checked.checks.map((c) => c.description)).toEqual(["extreme-fibre bending stress (tension) in part 1 against 100 MPa", "extreme-fibre bending stress (compression) in part 1 against 100 MPa"]);
+    // Each material against its own allowable: the plies (parts 0 and 2) against limits.bendingStress, the plate against its own.
+    const checked = si(flitch({ material: { E: "200 GPa" }, bendingStress: "165 MPa" }), { ...timber, limits: { bendingStress: 10 } });
+    expect(checked.checks.map((c) => c.description)).toEqual([
+      "extreme-fibre bending stress (tension) in part 0 against 10 MPa",
+      "extreme-fibre bending stress (compression) in part 0 against 10 MPa",
+      "extreme-fibre bending stress (tension) in part 1 against 165 MPa",
+      "extreme-fibre bending stress (compression) in part 1 against 165 MPa",
+      "extreme-fibre bending stress (tension) in part 2 against 10 MPa",
+      "extreme-fibre bending stress (compression) in part 2 against 10 MPa",
+    ]);
+    within(checked.checks[0]!.demand, (10e6 * 150) / It, 1e-12);
+    within(checked.checks[2]!.demand, (n * 10e6 * 150) / It, 1e-12);
+    expect(checked.warnings).toEqual([]);
+    const unchecked = si(flitch({ modularRatio: n }), { ...timber, limits: { bendingStress: 10 } });
+    expect(unchecked.checks.map((c) => c.description.replace(/ against.*/, ""))).toEqual([0, 0, 2, 2].map((p, i) => `extreme-fibre bending stress (${i % 2 === 0 ? "tension" : "compression"}) in part ${p}`));
+    expect(unchecked.warnings.map((w) => w.code)).toEqual(["part-bending-stress-not-checked"]);
   });
 });
 
