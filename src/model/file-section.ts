@@ -56,7 +56,7 @@ export interface ModelFilePoint {
 }
 
 /** What every part of a built-up section may carry besides its geometry. */
-interface ModelFilePartCommon {
+export interface ModelFilePartCommon {
   /** True for a hole. */
   readonly hole?: boolean;
   /** The part's own material. */

@@ -52,6 +52,7 @@ export type {
   ModelFilePlateGirderSection,
   ModelFileBuiltUpSection,
   ModelFileSectionPart,
+  ModelFilePartCommon,
   ModelFilePoint,
   ModelFileMaterial,
 } from "./file-section.js";
