@@ -1,6 +1,7 @@
 // The width terms (see width-terms.ts) of a section from the section module, read from its parts:
 // straight edges give linear terms, circular arcs (circles, sectors, fillets are exact there, not
 // polygonised) give circular roots, one per quarter of the circle so each is monotone in y.
+import { cosExact, sinExact } from "../section/angles.js";
 import type { Section, SectionPart } from "../section/index.js";
 import type { WidthTerm } from "./width-terms.js";
 
@@ -8,12 +9,7 @@ const QUARTER = Math.PI / 2;
 
 /** sin and cos, exact at multiples of a quarter turn (as the section module places its parts). */
 function unit(angle: number): { s: number; c: number } {
-  const k = Math.round(angle / QUARTER);
-  if (Math.abs(angle - k * QUARTER) < 1e-12) {
-    const m = ((k % 4) + 4) % 4;
-    return { s: m === 1 ? 1 : m === 3 ? -1 : 0, c: m === 0 ? 1 : m === 2 ? -1 : 0 };
-  }
-  return { s: Math.sin(angle), c: Math.cos(angle) };
+  return { s: sinExact(angle), c: cosExact(angle) };
 }
 
 /** Where one part's terms go; `sign` is +1 for a solid, -1 for a hole (times the winding). */

@@ -28,162 +28,72 @@ function cubicRoots(w: BandWidth, a: number, b: number, qTop: number, out: numbe
   polynomialRootsIn(cubic, 0, 3, a, b, out);
 }
 
-/** Values at one height of the pieces N and N' are made of, and N itself. */
+/**
+ * N at one height with, per term of the width (the linear part, then each arc), the values of
+ * b, b_t, b', b_t' and b'' that it contributes: five numbers a term.
+ */
 interface Pieces {
   readonly y: number;
   readonly q: number;
-  /** Per arc: u, u' and u''. */
-  readonly u: Float64Array;
-  /** N there. */
   readonly n: number;
+  readonly terms: readonly number[];
 }
 
 function piecesAt(w: BandWidth, y: number, q: number): Pieces {
-  const p = rootsAt(w, y);
-  return { y, q, u: p, n: numerator(w, y, q, p) };
-}
-
-function rootsAt(w: BandWidth, y: number): Float64Array {
-  const n = w.arcs.length;
-  const u = new Float64Array(3 * n);
-  for (let i = 0; i < n; i++) {
-    const arc = w.arcs[i]!;
-    const d = y - arc.centre;
-    const r2 = arc.radius * arc.radius;
-    const root = Math.sqrt(Math.max(r2 - d * d, 0));
-    u[3 * i] = root;
-    u[3 * i + 1] = -d / root;
-    u[3 * i + 2] = -r2 / (root * root * root);
+  const terms = [w.p0 + w.p1 * y, w.q0 + w.q1 * y, w.p1, w.q1, 0];
+  for (const { centre, radius, k, kt } of w.arcs) {
+    const d = y - centre;
+    const u = Math.sqrt(Math.max(radius * radius - d * d, 0));
+    // u' = -d / u, u'' = -r^2 / u^3
+    terms.push(k * u, kt * u, (-k * d) / u, (-kt * d) / u, (-k * radius * radius) / (u * u * u));
   }
-  return u;
+  const sum = (m: number): number => terms.reduce((acc, v, i) => (i % 5 === m ? acc + v : acc), 0);
+  return { y, q, n: -sum(1) * sum(0) * y - q * sum(2), terms };
 }
 
-/** N at height y with Q = q and the roots u (NaN where a root's slope is infinite and Q is zero). */
-function numerator(w: BandWidth, y: number, q: number, u: Float64Array): number {
-  let b = w.p0 + w.p1 * y;
-  let bt = w.q0 + w.q1 * y;
-  let db = w.p1;
-  w.arcs.forEach((arc, i) => {
-    b += arc.k * u[3 * i]!;
-    bt += arc.kt * u[3 * i]!;
-    if (arc.k !== 0) db += arc.k * u[3 * i + 1]!;
-  });
-  return -bt * b * y - q * db;
+type Interval = readonly [number, number];
+
+function times(a: Interval, b: Interval): Interval {
+  const p = [a[0] * b[0], a[0] * b[1], a[1] * b[0], a[1] * b[1]];
+  // an undefined product (0 times infinity) bounds nothing
+  return p.some(Number.isNaN) ? [-Infinity, Infinity] : [Math.min(...p), Math.max(...p)];
 }
 
-// Interval arithmetic on [lo, hi] pairs held in plain numbers (this runs per interval examined).
-// (a typed array rather than module-level variables, which would box every double written)
-const acc = new Float64Array(2);
-/** acc = [aLo, aHi] * [bLo, bHi]; an undefined product (0 * infinity) gives the whole line. */
-function mul(aLo: number, aHi: number, bLo: number, bHi: number): void {
-  const p1 = aLo * bLo;
-  const p2 = aLo * bHi;
-  const p3 = aHi * bLo;
-  const p4 = aHi * bHi;
-  if (Number.isNaN(p1 + p2 + p3 + p4)) {
-    acc[0] = -Infinity;
-    acc[1] = Infinity;
-    return;
-  }
-  acc[0] = Math.min(p1, p2, p3, p4);
-  acc[1] = Math.max(p1, p2, p3, p4);
+/** -(a + b) */
+function minusSum(a: Interval, b: Interval): Interval {
+  return [-a[1] - b[1], -a[0] - b[0]];
 }
-/** Adds k times the range of the values x, y (the ends of a monotone piece) to acc. */
-function addScaled(k: number, x: number, y: number): void {
-  if (k === 0) return;
-  const a = k * x;
-  const b = k * y;
-  acc[0]! += a < b ? a : b;
-  acc[1]! += a < b ? b : a;
-}
-
-/** Bounds of N and N' on an interval: [nLo, nHi], [dnLo, dnHi]. */
-const bound = new Float64Array(4);
 
 /**
- * Bounds of N and of N' = -b (b_t' y + b_t) - Q b'' over [s, t] into {@link bound}. Every piece
- * is monotone there (y, Q and each root u; u' always, u'' away from the circle's centre height,
- * which is a band end), so each piece's range is spanned by its end values and interval
- * arithmetic bounds the sums.
+ * Bounds of N = -b_t b y - Q b' and of N' = -b (b_t' y + b_t) - Q b'' over [s, t]. Every piece
+ * is monotone there (y, Q, each arc's u and u', and u'' as the circle's centre height is a band
+ * end), so each piece's range is spanned by its end values, and interval arithmetic bounds the sums.
  */
-function bounds(w: BandWidth, s: Pieces, t: Pieces): void {
-  const yLo = Math.min(s.y, t.y);
-  const yHi = Math.max(s.y, t.y);
-  const qLo = Math.min(s.q, t.q);
-  const qHi = Math.max(s.q, t.q);
-  // b, b_t (roots u), b', b_t' (slopes u'), b'' (curvatures u'')
-  let bLo = w.p0;
-  let bHi = w.p0;
-  let btLo = w.q0;
-  let btHi = w.q0;
-  let dbLo = w.p1;
-  let dbHi = w.p1;
-  let dbtLo = w.q1;
-  let dbtHi = w.q1;
-  let ddbLo = 0;
-  let ddbHi = 0;
-  acc[0] = 0;
-  acc[1] = 0;
-  addScaled(w.p1, yLo, yHi);
-  bLo += acc[0];
-  bHi += acc[1];
-  acc[0] = 0;
-  acc[1] = 0;
-  addScaled(w.q1, yLo, yHi);
-  btLo += acc[0];
-  btHi += acc[1];
-  for (let i = 0; i < w.arcs.length; i++) {
-    const arc = w.arcs[i]!;
-    for (let piece = 0; piece < 3; piece++) {
-      const x = s.u[3 * i + piece]!;
-      const y = t.u[3 * i + piece]!;
-      acc[0] = 0;
-      acc[1] = 0;
-      addScaled(arc.k, x, y);
-      if (piece === 0) {
-        bLo += acc[0];
-        bHi += acc[1];
-      } else if (piece === 1) {
-        dbLo += acc[0];
-        dbHi += acc[1];
-      } else {
-        ddbLo += acc[0];
-        ddbHi += acc[1];
-      }
-      if (piece === 2) continue;
-      acc[0] = 0;
-      acc[1] = 0;
-      addScaled(arc.kt, x, y);
-      if (piece === 0) {
-        btLo += acc[0];
-        btHi += acc[1];
-      } else {
-        dbtLo += acc[0];
-        dbtHi += acc[1];
-      }
+function bounds(s: Pieces, t: Pieces): { n: Interval; dn: Interval } {
+  const range = (m: number): Interval => {
+    let lo = 0;
+    let hi = 0;
+    for (let i = m; i < s.terms.length; i += 5) {
+      const x = s.terms[i]!;
+      const y = t.terms[i]!;
+      lo += Math.min(x, y);
+      hi += Math.max(x, y);
     }
-  }
-  // N = -(b_t b) y - Q b'
-  mul(btLo, btHi, bLo, bHi);
-  mul(acc[0], acc[1], yLo, yHi);
-  const aLo = -acc[1];
-  const aHi = -acc[0];
-  mul(qLo, qHi, dbLo, dbHi);
-  bound[0] = aLo - acc[1];
-  bound[1] = aHi - acc[0];
-  // N' = -b (b_t' y + b_t) - Q b''
-  mul(dbtLo, dbtHi, yLo, yHi);
-  mul(bLo, bHi, acc[0] + btLo, acc[1] + btHi);
-  const cLo = -acc[1];
-  const cHi = -acc[0];
-  mul(qLo, qHi, ddbLo, ddbHi);
-  bound[2] = cLo - acc[1];
-  bound[3] = cHi - acc[0];
+    return [lo, hi];
+  };
+  const y: Interval = [s.y, t.y];
+  const q: Interval = [Math.min(s.q, t.q), Math.max(s.q, t.q)];
+  const [b, bt, db, dbt, ddb] = [0, 1, 2, 3, 4].map(range) as [Interval, Interval, Interval, Interval, Interval];
+  const slopeTerm = times(dbt, y);
+  return {
+    n: minusSum(times(times(bt, b), y), times(q, db)),
+    dn: minusSum(times(b, [slopeTerm[0] + bt[0], slopeTerm[1] + bt[1]]), times(q, ddb)),
+  };
 }
 
-/** True when [lo, hi] may hold zero (or is undefined). */
-function holdsZero(lo: number, hi: number): boolean {
-  return !(lo > 0 || hi < 0);
+/** True when the bound may hold zero (or is undefined). */
+function holdsZero(a: Interval): boolean {
+  return !(a[0] > 0 || a[1] < 0);
 }
 
 /** Bisects [s, t], where N changes sign, down to adjacent floating-point numbers. */
@@ -224,11 +134,11 @@ function arcRoots(w: BandWidth, a: number, b: number, qAt: FirstMomentAt, out: n
   let work = 0;
   while (stack.length > 0) {
     const [s, t] = stack.pop()!;
-    bounds(w, s, t);
-    if (!holdsZero(bound[0]!, bound[1]!)) continue;
+    const { n, dn } = bounds(s, t);
+    if (!holdsZero(n)) continue;
     const ns = s.n;
     const nt = t.n;
-    if (!holdsZero(bound[2]!, bound[3]!) && !Number.isNaN(ns) && !Number.isNaN(nt)) {
+    if (!holdsZero(dn) && !Number.isNaN(ns) && !Number.isNaN(nt)) {
       if (ns === 0) out.push(s.y);
       else if (nt === 0) out.push(t.y);
       else if (ns > 0 !== nt > 0) out.push(bisect(w, qAt, s.y, t.y, ns));

@@ -27,16 +27,16 @@ export interface WidthTerm {
   readonly ratio: number;
 }
 
-/** One circle's root as it appears in a band: sum of k (actual width) and of n k (transformed). */
+/** One arc's root as it appears in a band: k in the actual width, n k in the transformed. */
 export interface BandArc {
   /** Height of the circle's centre (length). */
   readonly centre: number;
   /** Radius (length). */
   readonly radius: number;
   /** Multiplier in the actual width. */
-  k: number;
+  readonly k: number;
   /** Multiplier in the transformed width. */
-  kt: number;
+  readonly kt: number;
 }
 
 /**
@@ -53,7 +53,7 @@ export interface BandWidth {
   q0: number;
   /** Slope of the transformed width. */
   q1: number;
-  /** Circular roots, one per distinct circle. */
+  /** Circular roots, one per arc. */
   readonly arcs: BandArc[];
 }
 
@@ -66,19 +66,7 @@ export function bandWidth(terms: readonly WidthTerm[], mid: number): BandWidth {
     out.p1 += t.c1;
     out.q0 += t.ratio * t.c0;
     out.q1 += t.ratio * t.c1;
-    if (t.k === 0) continue;
-    const same = out.arcs.find((a) => a.centre === t.centre && a.radius === t.radius);
-    if (same) {
-      same.k += t.k;
-      same.kt += t.ratio * t.k;
-    } else {
-      out.arcs.push({ centre: t.centre, radius: t.radius, k: t.k, kt: t.ratio * t.k });
-    }
-  }
-  // roots that cancel (two equal arcs run in opposite directions) leave the band polynomial
-  for (let i = out.arcs.length - 1; i >= 0; i--) {
-    const a = out.arcs[i] as BandArc;
-    if (a.k === 0 && a.kt === 0) out.arcs.splice(i, 1);
+    if (t.k !== 0) out.arcs.push({ centre: t.centre, radius: t.radius, k: t.k, kt: t.ratio * t.k });
   }
   return out;
 }
