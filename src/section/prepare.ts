@@ -6,6 +6,7 @@ import { ARC, STRIDE, pushPartBoundary } from "./edges.js";
 import { sinExact, cosExact } from "./angles.js";
 import { addMoments } from "./integrals.js";
 import { validatePart } from "./validatePart.js";
+import { computeWeights, type Weights } from "./weights.js";
 import type { Section, SectionPart } from "./types.js";
 
 /** A checked section in the compiled form the property functions integrate over. */
@@ -38,6 +39,8 @@ export interface PreparedSection {
   readonly netArea: number;
   /** Each part's own moments (area, \int y, \int z, \int y^2, \int z^2, \int y z; relative coordinates, unsigned), stride 6. */
   readonly partMoments: Float64Array;
+  /** The weights for the default reference modulus (see weights.ts). */
+  readonly defaultWeights: Weights;
 }
 
 const cache = new WeakMap<Section, PreparedSection>();
@@ -198,7 +201,8 @@ function compile(section: Section, found: IssueCollector): PreparedSection | und
     found.add("section-area-not-positive", ["parts"], `The holes take away all of the area; they must not overlap or cover the solids.`, { area: netArea });
   }
   if (!found.empty) return undefined;
-  return { section, count, edges, edgeStart, sign, modulus, yieldStrength, partBox, box, refZ, refY, hasMaterial, netArea, partMoments };
+  const defaultWeights = computeWeights({ count, sign, modulus, hasMaterial }, undefined);
+  return { section, count, edges, edgeStart, sign, modulus, yieldStrength, partBox, box, refZ, refY, hasMaterial, netArea, partMoments, defaultWeights };
 }
 
 /** Records every problem with the section; returns the compiled form when there is none. */
