@@ -52,7 +52,7 @@ function antiderivatives(g: Float64Array, offset: number, t: number): void {
 
 const G = new Float64Array(18);
 
-function addArc(out: Float64Array, w: number, zc: number, yc: number, r: number, t0: number, t1: number): void {
+function addArc(out: Float64Array, at: number, w: number, zc: number, yc: number, r: number, t0: number, t1: number): void {
   if (t0 === t1) return;
   antiderivatives(G, 0, t0);
   antiderivatives(G, 9, t1);
@@ -71,21 +71,21 @@ function addArc(out: Float64Array, w: number, zc: number, yc: number, r: number,
   const Z = zc;
   const Y = yc;
   const zPart = Z * Z * k00 + 2 * Z * k10 + k20;
-  out[M_AREA]! += w * (Z * k00 + k10);
-  out[M_Y]! += w * (Z * Y * k00 + Z * k01 + Y * k10 + k11);
-  out[M_Z]! += (w * zPart) / 2;
-  out[M_YY]! += w * (Z * (Y * Y * k00 + 2 * Y * k01 + k02) + (Y * Y * k10 + 2 * Y * k11 + k12));
-  out[M_ZZ]! += (w * (Z * Z * Z * k00 + 3 * Z * Z * k10 + 3 * Z * k20 + k30)) / 3;
-  out[M_YZ]! += (w * (Y * zPart + Z * Z * k01 + 2 * Z * k11 + k21)) / 2;
+  out[at + M_AREA]! += w * (Z * k00 + k10);
+  out[at + M_Y]! += w * (Z * Y * k00 + Z * k01 + Y * k10 + k11);
+  out[at + M_Z]! += (w * zPart) / 2;
+  out[at + M_YY]! += w * (Z * (Y * Y * k00 + 2 * Y * k01 + k02) + (Y * Y * k10 + 2 * Y * k11 + k12));
+  out[at + M_ZZ]! += (w * (Z * Z * Z * k00 + 3 * Z * Z * k10 + 3 * Z * k20 + k30)) / 3;
+  out[at + M_YZ]! += (w * (Y * zPart + Z * Z * k01 + 2 * Z * k11 + k21)) / 2;
 }
 
-/** Adds `w` times the moments of the region bounded by edges [from, to) into `out` (six moments). */
-export function addMoments(out: Float64Array, edges: Float64Array, from: number, to: number, w: number): void {
+/** Adds `w` times the moments of the region bounded by edges [from, to) into `out` (six moments, from index `at`). */
+export function addMoments(out: Float64Array, edges: Float64Array, from: number, to: number, w: number, at = 0): void {
   // straight edges accumulate in locals (the hot loop); arcs add straight into `out`
   let a = 0, my = 0, mz = 0, myy = 0, mzz = 0, myz = 0;
   for (let o = from * STRIDE, end = to * STRIDE; o < end; o += STRIDE) {
     if (edges[o] === ARC) {
-      addArc(out, w, edges[o + 1]!, edges[o + 2]!, edges[o + 3]!, edges[o + 4]!, edges[o + 5]!);
+      addArc(out, at, w, edges[o + 1]!, edges[o + 2]!, edges[o + 3]!, edges[o + 4]!, edges[o + 5]!);
       continue;
     }
     const z0 = edges[o + 1]!;
@@ -107,12 +107,12 @@ export function addMoments(out: Float64Array, edges: Float64Array, from: number,
     mzz += d * (z0 + z1) * (z00 + z11);
     myz += d * (y0 * (3 * z00 + 2 * z01 + z11) + y1 * (z00 + 2 * z01 + 3 * z11));
   }
-  out[M_AREA]! += (w * a) / 2;
-  out[M_Y]! += (w * my) / 6;
-  out[M_Z]! += (w * mz) / 6;
-  out[M_YY]! += (w * myy) / 12;
-  out[M_ZZ]! += (w * mzz) / 12;
-  out[M_YZ]! += (w * myz) / 24;
+  out[at + M_AREA]! += (w * a) / 2;
+  out[at + M_Y]! += (w * my) / 6;
+  out[at + M_Z]! += (w * mz) / 6;
+  out[at + M_YY]! += (w * myy) / 12;
+  out[at + M_ZZ]! += (w * mzz) / 12;
+  out[at + M_YZ]! += (w * myz) / 24;
 }
 
 /**
@@ -132,7 +132,7 @@ export function addMomentsAbove(out: Float64Array, edges: Float64Array, from: nu
       const hi = t0 < t1 ? t1 : t0;
       const h = (cut - yc) / r;
       if (h <= -1) {
-        addArc(out, w, zc, yc, r, t0, t1);
+        addArc(out, 0, w, zc, yc, r, t0, t1);
         continue;
       }
       if (h >= 1) continue;
@@ -142,8 +142,8 @@ export function addMomentsAbove(out: Float64Array, edges: Float64Array, from: nu
       if (right) a = Math.max(lo, Math.asin(h));
       else b = Math.min(hi, Math.PI - Math.asin(h));
       if (a >= b) continue;
-      if (t0 < t1) addArc(out, w, zc, yc, r, a, b);
-      else addArc(out, w, zc, yc, r, b, a);
+      if (t0 < t1) addArc(out, 0, w, zc, yc, r, a, b);
+      else addArc(out, 0, w, zc, yc, r, b, a);
     } else {
       let z0 = edges[o + 1]!;
       let y0 = edges[o + 2]!;

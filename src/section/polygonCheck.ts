@@ -26,34 +26,63 @@ function segmentsMeet(
   return false;
 }
 
+// scratch for the sweep (grown as needed; nothing in it outlives a call)
+let low = new Float64Array(64);
+let high = new Float64Array(64);
+let order = new Int32Array(64);
+
 /**
  * The first pair of edges (by index; edge i runs from point i to point i + 1) that makes the
  * polygon non-simple, or undefined when it is simple.
  */
 export function findSelfIntersection(zs: readonly number[], ys: readonly number[]): readonly [number, number] | undefined {
   const n = zs.length;
-  const z = (i: number): number => zs[i % n] ?? 0;
-  const y = (i: number): number => ys[i % n] ?? 0;
   // folds: an edge that turns straight back along the one before it
   for (let i = 0; i < n; i++) {
-    const p = (i + n - 1) % n;
-    const cross = orient(z(p), y(p), z(i), y(i), z(i + 1), y(i + 1));
-    const dot = (z(i) - z(p)) * (z(i + 1) - z(i)) + (y(i) - y(p)) * (y(i + 1) - y(i));
+    const p = i === 0 ? n - 1 : i - 1;
+    const q = i + 1 === n ? 0 : i + 1;
+    const zp = zs[p]!, yp = ys[p]!, zi = zs[i]!, yi = ys[i]!, zq = zs[q]!, yq = ys[q]!;
+    const cross = orient(zp, yp, zi, yi, zq, yq);
+    const dot = (zi - zp) * (zq - zi) + (yi - yp) * (yq - yi);
     if (cross === 0 && dot < 0) return [p, i];
   }
-  const order = Array.from({ length: n }, (_, i) => i);
-  const low = order.map((i) => Math.min(y(i), y(i + 1)));
-  const high = order.map((i) => Math.max(y(i), y(i + 1)));
-  order.sort((a, b) => (low[a] ?? 0) - (low[b] ?? 0));
+  if (order.length < n) {
+    low = new Float64Array(2 * n);
+    high = new Float64Array(2 * n);
+    order = new Int32Array(2 * n);
+  }
+  for (let i = 0; i < n; i++) {
+    const a = ys[i]!;
+    const b = ys[i + 1 === n ? 0 : i + 1]!;
+    low[i] = a < b ? a : b;
+    high[i] = a < b ? b : a;
+  }
+  // edges in order of their lowest y (a stable sort: ties keep index order)
+  if (n <= 32) {
+    for (let i = 0; i < n; i++) {
+      const key = low[i]!;
+      let k = i;
+      while (k > 0 && low[order[k - 1]!]! > key) {
+        order[k] = order[k - 1]!;
+        k--;
+      }
+      order[k] = i;
+    }
+  } else {
+    const sorted = Array.from({ length: n }, (_, i) => i).sort((a, b) => low[a]! - low[b]!);
+    for (let i = 0; i < n; i++) order[i] = sorted[i]!;
+  }
   for (let a = 0; a < n; a++) {
-    const i = order[a] ?? 0;
-    const top = high[i] ?? 0;
+    const i = order[a]!;
+    const top = high[i]!;
+    const i1 = i + 1 === n ? 0 : i + 1;
     for (let b = a + 1; b < n; b++) {
-      const j = order[b] ?? 0;
-      if ((low[j] ?? 0) > top) break;
+      const j = order[b]!;
+      if (low[j]! > top) break;
       const d = Math.abs(i - j);
       if (d === 1 || d === n - 1) continue; // neighbours share a corner
-      if (segmentsMeet(z(i), y(i), z(i + 1), y(i + 1), z(j), y(j), z(j + 1), y(j + 1))) return i < j ? [i, j] : [j, i];
+      const j1 = j + 1 === n ? 0 : j + 1;
+      if (segmentsMeet(zs[i]!, ys[i]!, zs[i1]!, ys[i1]!, zs[j]!, ys[j]!, zs[j1]!, ys[j1]!)) return i < j ? [i, j] : [j, i];
     }
   }
   return undefined;

@@ -6,7 +6,7 @@ import { ARC, STRIDE, pushPartBoundary } from "./edges.js";
 import { sinExact, cosExact } from "./angles.js";
 import { addMoments } from "./integrals.js";
 import { validatePart } from "./validatePart.js";
-import { computeWeights, type Weights } from "./weights.js";
+import { fillWeights, type Weights } from "./weights.js";
 import type { Section, SectionPart } from "./types.js";
 
 /** A checked section in the compiled form the property functions integrate over. */
@@ -73,19 +73,41 @@ function edgeBox(edges: number[], from: number, to: number, box: Float64Array, a
   box[at + 3] = yMax;
 }
 
+// Typed arrays larger than 64 bytes live outside the V8 heap and cost microseconds each to
+// allocate: every typed array of a compiled section is a view on one buffer.
 function compile(section: Section, found: IssueCollector): PreparedSection | undefined {
   const parts = section.parts;
   const count = parts.length;
   const list: number[] = [];
-  const edgeStart = new Int32Array(count + 1);
+  const starts: number[] = [];
   for (let i = 0; i < count; i++) {
-    edgeStart[i] = list.length / STRIDE;
+    starts.push(list.length / STRIDE);
     pushPartBoundary(list, parts[i] as SectionPart);
   }
-  edgeStart[count] = list.length / STRIDE;
-  const partBox = new Float64Array(count * 4);
-  const sign = new Float64Array(count);
-  const box = new Float64Array([Infinity, -Infinity, Infinity, -Infinity]);
+  starts.push(list.length / STRIDE);
+  const doubles = list.length + 4 + count * 15;
+  const buffer = new ArrayBuffer(doubles * 8 + (count + 1) * 4);
+  let at = 0;
+  const take = (n: number): Float64Array => {
+    const view = new Float64Array(buffer, at * 8, n);
+    at += n;
+    return view;
+  };
+  const edges = take(list.length);
+  const partBox = take(count * 4);
+  const box = take(4);
+  const sign = take(count);
+  const modulus = take(count);
+  const yieldStrength = take(count);
+  const partMoments = take(count * 6);
+  const ratios = take(count);
+  const weights = take(count);
+  const edgeStart = new Int32Array(buffer, doubles * 8, count + 1);
+  edgeStart.set(starts);
+  box[0] = Infinity;
+  box[1] = -Infinity;
+  box[2] = Infinity;
+  box[3] = -Infinity;
   for (let i = 0; i < count; i++) {
     edgeBox(list, edgeStart[i]!, edgeStart[i + 1]!, partBox, i * 4);
     const hole = parts[i]?.hole === true;
@@ -103,12 +125,13 @@ function compile(section: Section, found: IssueCollector): PreparedSection | und
   const refZ = (box[0]! + box[1]!) / 2;
   const refY = (box[2]! + box[3]!) / 2;
   for (let e = 0; e < list.length; e += STRIDE) {
-    list[e + 1]! -= refZ;
-    list[e + 2]! -= refY;
-    if (list[e] !== ARC) {
-      list[e + 3]! -= refZ;
-      list[e + 4]! -= refY;
-    }
+    const arc = list[e] === ARC;
+    edges[e] = list[e]!;
+    edges[e + 1] = list[e + 1]! - refZ;
+    edges[e + 2] = list[e + 2]! - refY;
+    edges[e + 3] = arc ? list[e + 3]! : list[e + 3]! - refZ;
+    edges[e + 4] = arc ? list[e + 4]! : list[e + 4]! - refY;
+    edges[e + 5] = list[e + 5]!;
   }
   for (let i = 0; i < count; i++) {
     partBox[i * 4]! -= refZ;
@@ -120,12 +143,11 @@ function compile(section: Section, found: IssueCollector): PreparedSection | und
   box[1]! -= refZ;
   box[2]! -= refY;
   box[3]! -= refY;
-  const edges = Float64Array.from(list);
   const tolerance = 1e-9 * Math.max(box[1]! - box[0]!, box[3]! - box[2]!);
 
   // materials: all solid parts have one, or none does
-  const modulus = new Float64Array(count).fill(Number.NaN);
-  const yieldStrength = new Float64Array(count).fill(Number.NaN);
+  modulus.fill(Number.NaN);
+  yieldStrength.fill(Number.NaN);
   let withMaterial = 0;
   let solids = 0;
   for (let i = 0; i < count; i++) {
@@ -152,7 +174,7 @@ function compile(section: Section, found: IssueCollector): PreparedSection | und
   for (let i = 0; i < count; i++) {
     if (sign[i] === 1) continue;
     const samples = boundarySamples(edges, edgeStart[i]!, edgeStart[i + 1]!);
-    const hits = new Int32Array(count);
+    const hits: number[] = new Array<number>(count).fill(0);
     let outside = -1;
     for (let s = 0; s < samples.length; s += 2) {
       const z = samples[s]!;
@@ -188,20 +210,16 @@ function compile(section: Section, found: IssueCollector): PreparedSection | und
   }
 
   // each part's own moments, integrated once: they do not depend on the reference modulus
-  const partMoments = new Float64Array(count * 6);
-  const one = new Float64Array(6);
   let netArea = 0;
   for (let i = 0; i < count; i++) {
-    one.fill(0);
-    addMoments(one, edges, edgeStart[i]!, edgeStart[i + 1]!, 1);
-    partMoments.set(one, i * 6);
-    netArea += sign[i]! * one[0]!;
+    addMoments(partMoments, edges, edgeStart[i]!, edgeStart[i + 1]!, 1, i * 6);
+    netArea += sign[i]! * partMoments[i * 6]!;
   }
   if (found.empty && !(netArea > 1e-12 * (box[1]! - box[0]!) * (box[3]! - box[2]!))) {
     found.add("section-area-not-positive", ["parts"], `The holes take away all of the area; they must not overlap or cover the solids.`, { area: netArea });
   }
   if (!found.empty) return undefined;
-  const defaultWeights = computeWeights({ count, sign, modulus, hasMaterial }, undefined);
+  const defaultWeights = fillWeights({ count, sign, modulus, hasMaterial }, undefined, ratios, weights);
   return { section, count, edges, edgeStart, sign, modulus, yieldStrength, partBox, box, refZ, refY, hasMaterial, netArea, partMoments, defaultWeights };
 }
 

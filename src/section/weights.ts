@@ -16,12 +16,10 @@ export interface Weights {
 type WeightInput = Pick<PreparedSection, "count" | "sign" | "modulus" | "hasMaterial">;
 
 /**
- * Weights for a reference modulus, computed now (default: that of the first solid part with a
- * material).
+ * Weights for a reference modulus (default: that of the first solid part with a material),
+ * written into `ratios` and `weights` (count numbers each).
  */
-export function computeWeights(p: WeightInput, referenceModulus: number | undefined): Weights {
-  const ratios = new Float64Array(p.count);
-  const weights = new Float64Array(p.count);
+export function fillWeights(p: WeightInput, referenceModulus: number | undefined, ratios: Float64Array, weights: Float64Array): Weights {
   let ref: number | null = referenceModulus ?? null;
   if (ref === null && p.hasMaterial) {
     for (let i = 0; i < p.count; i++) {
@@ -52,5 +50,6 @@ export function partWeights(p: PreparedSection, referenceModulus: number | undef
     found.add("reference-modulus-not-positive", ["referenceModulus"], `The reference modulus must be a finite number greater than zero; got ${String(referenceModulus)}.`, { value: String(referenceModulus) });
     found.throwIfAny();
   }
-  return computeWeights(p, referenceModulus);
+  const both = new Float64Array(2 * p.count);
+  return fillWeights(p, referenceModulus, both.subarray(0, p.count), both.subarray(p.count));
 }
