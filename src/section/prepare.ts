@@ -113,17 +113,17 @@ function compile(section: Section, found: IssueCollector): PreparedSection | und
     const hole = parts[i]?.hole === true;
     sign[i] = hole ? -1 : 1;
     if (hole) continue;
-    box[0] = Math.min(box[0]!, partBox[i * 4]!);
-    box[1] = Math.max(box[1]!, partBox[i * 4 + 1]!);
-    box[2] = Math.min(box[2]!, partBox[i * 4 + 2]!);
-    box[3] = Math.max(box[3]!, partBox[i * 4 + 3]!);
+    box[0] = Math.min(box[0], partBox[i * 4]!);
+    box[1] = Math.max(box[1], partBox[i * 4 + 1]!);
+    box[2] = Math.min(box[2], partBox[i * 4 + 2]!);
+    box[3] = Math.max(box[3], partBox[i * 4 + 3]!);
   }
-  if (!(box[0]! < box[1]!)) {
+  if (!(box[0] < box[1])) {
     found.add("section-no-solid", ["parts"], "Every part is a hole; add the solid parts.");
     return undefined;
   }
-  const refZ = (box[0]! + box[1]!) / 2;
-  const refY = (box[2]! + box[3]!) / 2;
+  const refZ = (box[0] + box[1]) / 2;
+  const refY = (box[2] + box[3]) / 2;
   for (let e = 0; e < list.length; e += STRIDE) {
     const arc = list[e] === ARC;
     edges[e] = list[e]!;
@@ -139,11 +139,11 @@ function compile(section: Section, found: IssueCollector): PreparedSection | und
     partBox[i * 4 + 2]! -= refY;
     partBox[i * 4 + 3]! -= refY;
   }
-  box[0]! -= refZ;
-  box[1]! -= refZ;
-  box[2]! -= refY;
-  box[3]! -= refY;
-  const tolerance = 1e-9 * Math.max(box[1]! - box[0]!, box[3]! - box[2]!);
+  box[0] -= refZ;
+  box[1] -= refZ;
+  box[2] -= refY;
+  box[3] -= refY;
+  const tolerance = 1e-9 * Math.max(box[1] - box[0], box[3] - box[2]);
 
   // materials: all solid parts have one, or none does
   modulus.fill(Number.NaN);
@@ -215,7 +215,7 @@ function compile(section: Section, found: IssueCollector): PreparedSection | und
     addMoments(partMoments, edges, edgeStart[i]!, edgeStart[i + 1]!, 1, i * 6);
     netArea += sign[i]! * partMoments[i * 6]!;
   }
-  if (found.empty && !(netArea > 1e-12 * (box[1]! - box[0]!) * (box[3]! - box[2]!))) {
+  if (found.empty && !(netArea > 1e-12 * (box[1] - box[0]) * (box[3] - box[2]))) {
     found.add("section-area-not-positive", ["parts"], `The holes take away all of the area; they must not overlap or cover the solids.`, { area: netArea });
   }
   if (!found.empty) return undefined;
