@@ -73,8 +73,34 @@ function edgeBox(edges: number[], from: number, to: number, box: Float64Array, a
   box[at + 3] = yMax;
 }
 
-// Typed arrays larger than 64 bytes live outside the V8 heap and cost microseconds each to
-// allocate: every typed array of a compiled section is a view on one buffer.
+/**
+ * Typed arrays larger than 64 bytes live outside the V8 heap and cost about a microsecond each
+ * to allocate, so every typed array of a compiled section is a view on one stretch of memory,
+ * and small sections' stretches are carved from shared blocks of BLOCK doubles (as Node carves
+ * small Buffers from a pool). Each section owns its stretch, which starts zeroed and is never
+ * handed out again; a block lives while any section cut from it does. A section needing more
+ * than a quarter of a block gets a buffer of its own.
+ */
+const BLOCK = 4096;
+let block = new ArrayBuffer(0);
+let blockUsed = BLOCK;
+let carvedAt = 0;
+
+/** A buffer with `doubles` zeroed doubles free from byte `carvedAt`. */
+function carve(doubles: number): ArrayBuffer {
+  if (doubles > BLOCK / 4) {
+    carvedAt = 0;
+    return new ArrayBuffer(doubles * 8);
+  }
+  if (blockUsed + doubles > BLOCK) {
+    block = new ArrayBuffer(BLOCK * 8);
+    blockUsed = 0;
+  }
+  carvedAt = blockUsed * 8;
+  blockUsed += doubles;
+  return block;
+}
+
 function compile(section: Section, found: IssueCollector): PreparedSection | undefined {
   const parts = section.parts;
   const count = parts.length;
@@ -86,11 +112,11 @@ function compile(section: Section, found: IssueCollector): PreparedSection | und
   }
   starts.push(list.length / STRIDE);
   const doubles = list.length + 4 + count * 15;
-  const buffer = new ArrayBuffer(doubles * 8 + (count + 1) * 4);
-  let at = 0;
+  const buffer = carve(doubles + Math.ceil((count + 1) / 2));
+  let at = carvedAt;
   const take = (n: number): Float64Array => {
-    const view = new Float64Array(buffer, at * 8, n);
-    at += n;
+    const view = new Float64Array(buffer, at, n);
+    at += n * 8;
     return view;
   };
   const edges = take(list.length);
@@ -102,7 +128,7 @@ function compile(section: Section, found: IssueCollector): PreparedSection | und
   const partMoments = take(count * 6);
   const ratios = take(count);
   const weights = take(count);
-  const edgeStart = new Int32Array(buffer, doubles * 8, count + 1);
+  const edgeStart = new Int32Array(buffer, at, count + 1);
   edgeStart.set(starts);
   box[0] = Infinity;
   box[1] = -Infinity;
