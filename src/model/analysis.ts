@@ -111,6 +111,21 @@ export interface ModelStressExtreme {
   readonly at: number;
   /** Fibre height above the centroid (negative below), in the section-length unit. */
   readonly y: number;
+  /**
+   * For a section of several materials: the index of the part (in `section.parts`) where the
+   * stress occurs, sigma = -n M y / I_z with n the part's modular ratio. Absent for one material.
+   */
+  readonly part?: number;
+}
+
+/** The peak shear stress and where it occurs. */
+export interface ModelShearStressExtreme {
+  /** Shear stress magnitude, tau = |V| Q / (I_z b), in the stress unit (>= 0). */
+  readonly value: number;
+  /** Position along the member (where |V| is largest), in the length unit. */
+  readonly at: number;
+  /** Height of the cut where it acts, above the centroid (negative below), in the section-length unit. */
+  readonly y: number;
 }
 
 /** The largest tensile and compressive bending stress on the member. */
@@ -119,14 +134,20 @@ export interface ModelStress {
   readonly tension: ModelStressExtreme;
   /** Largest compression (a value <= 0). */
   readonly compression: ModelStressExtreme;
-  /** Largest shear stress magnitude, when the section allows it to be computed. */
-  readonly shear?: ModelExtreme;
+  /** Largest shear stress magnitude and where it acts; absent when the shear force is zero everywhere. */
+  readonly shear?: ModelShearStressExtreme;
 }
 
-/** One check of the member against a limit of the model. */
+/**
+ * One check of the member against a limit of the model, as decided by the member-check module
+ * (`checkMember` of `flexura/check`), re-expressed in the model's units.
+ */
 export interface ModelCheck {
-  /** What is checked. */
-  readonly kind: "deflection" | "bending-stress" | "shear-stress";
+  /**
+   * What is checked: the deflection of one span or cantilever; the peak tensile or compressive
+   * bending stress (each against the allowable bending stress); the peak shear stress.
+   */
+  readonly kind: "deflection" | "bending-tension" | "bending-compression" | "shear-stress";
   /** The demand (a magnitude), in `unit`. */
   readonly demand: number;
   /** The limit (a magnitude), in `unit`. */
@@ -139,8 +160,14 @@ export interface ModelCheck {
   readonly at: number;
   /** The unit of `demand` and `capacity`. */
   readonly unit: string;
-  /** A short plain description, such as "deflection of span 1 (0 to 4 m) against span/360". */
+  /** A short plain description, such as "deflection of span 1 (0 to 4 m) against its length/360". */
   readonly description: string;
+  /** Deflection checks: the index of the span or cantilever, left to right from 0. */
+  readonly span?: number;
+  /** Bending checks: the fibre where the stress occurs. */
+  readonly fibre?: "top" | "bottom";
+  /** Stress checks: the fibre or cut height above the centroid (negative below), in the section-length unit. */
+  readonly y?: number;
 }
 
 /** A caution about the model or its results that does not stop the analysis. */

@@ -1,9 +1,8 @@
 import { solveBeam, type BeamSolution } from "../beam/index.js";
 import { attempt, FlexuraError, isFlexuraError, type FlexuraIssue, type Result } from "../errors/index.js";
-import { extremeBendingStresses, peakShearStress } from "../stress/index.js";
-import type { ModelAnalysis, ModelScale, ModelStress, ModelWarning } from "./analysis.js";
+import type { ModelAnalysis, ModelScale, ModelWarning } from "./analysis.js";
 import { beamInputInSI } from "./beam-input.js";
-import { deflectionChecks, stressChecks } from "./checks.js";
+import { modelVerdicts } from "./checks.js";
 import { diagramsOf, peaksInModelUnits } from "./diagrams.js";
 import type { Model } from "./model.js";
 import { sectionInSI, sectionResult, type SectionInSI } from "./model-section.js";
@@ -38,30 +37,11 @@ function solve(model: Model, scale: ModelScale, section: SectionInSI | undefined
   }
 }
 
-function stressOf(solution: BeamSolution, section: SectionInSI, scale: ModelScale): ModelStress {
-  const p = section.properties;
-  const props = { secondMomentZ: p.secondMomentZ, extremes: { top: p.extremes.top, bottom: p.extremes.bottom } };
-  // The extreme stresses occur at an extreme fibre under the largest sagging or hogging moment.
-  const peaks = solution.peaks.moment;
-  const atMax = extremeBendingStresses(peaks.max.value, props);
-  const atMin = extremeBendingStresses(peaks.min.value, props);
-  const tension = atMax.tension.stress >= atMin.tension.stress ? { s: atMax.tension, at: peaks.max.at } : { s: atMin.tension, at: peaks.min.at };
-  const compression = atMax.compression.stress <= atMin.compression.stress ? { s: atMax.compression, at: peaks.max.at } : { s: atMin.compression, at: peaks.min.at };
-  const shearPeaks = solution.peaks.shear;
-  const V = shearPeaks.max.value >= -shearPeaks.min.value ? shearPeaks.max : shearPeaks.min;
-  const tau = section.bands.length > 0 && V.value !== 0 ? peakShearStress(V.value, section.bands, { secondMomentZ: p.secondMomentZ }) : undefined;
-  const y = (v: number): number => v / scale.sectionLength;
-  return {
-    tension: { value: tension.s.stress / scale.stress, at: tension.at / scale.length, y: y(tension.s.y) },
-    compression: { value: compression.s.stress / scale.stress, at: compression.at / scale.length, y: y(compression.s.y) },
-    ...(tau === undefined ? {} : { shear: { value: tau.stress / scale.stress, at: V.at / scale.length } }),
-  };
-}
-
 /**
  * Analyses a model: converts it to SI, solves the member, and when the model has a section,
  * computes its properties and the extreme bending and shear stresses; checks the member against
- * the model's limits. Every load acts with factor 1 (load cases are kept on the loads but not
+ * the model's limits. Stresses and checks come from the member-check module (`checkMember` of
+ * `flexura/check`, run on the member in SI), so a model and a direct call give the same verdicts. Every load acts with factor 1 (load cases are kept on the loads but not
  * combined). Results are in the model's own units, named in `units`.
  *
  * Sign conventions: reactions positive upward and counterclockwise; moment positive sagging;
@@ -89,8 +69,7 @@ export function analyzeModel(model: Model): ModelAnalysis {
   const section = model.section === undefined ? undefined : sectionInSI(model.section, scale);
   const solution = solve(model, scale, section);
   const warnings: ModelWarning[] = solution.warnings.map((w) => ({ code: w.code, message: w.message }));
-  const stress = section === undefined ? undefined : stressOf(solution, section, scale);
-  const checks = [...deflectionChecks(model, solution, scale), ...stressChecks(model, stress, warnings)];
+  const { checks, stress } = modelVerdicts(model, solution, section, scale, warnings);
   const peaks = solution.peaks;
   const results = withoutNegativeZero({
     reactions: solution.reactions.map((r) => ({

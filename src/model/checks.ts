@@ -1,105 +1,147 @@
+// The model's checks, run by the member-check module (src/check): this file only converts the
+// model's limits to SI, hands them over, and re-expresses the results in the model's units.
 import type { BeamSolution } from "../beam/index.js";
-import { evaluatePiecewise, extremesOf, piecewisePolynomial, type PiecewisePolynomial } from "../math/index.js";
-import type { ModelCheck, ModelScale, ModelStress, ModelWarning } from "./analysis.js";
-import type { Model } from "./model.js";
-
-function check(kind: ModelCheck["kind"], demand: number, capacity: number, at: number, unit: string, description: string): ModelCheck {
-  const utilisation = demand / capacity;
-  return { kind, demand, capacity, utilisation, pass: demand <= capacity, at, unit, description };
-}
+import {
+  checkDeflection,
+  checkMember,
+  memberSection,
+  spanDeflections,
+  type CheckResult,
+  type DeflectionLimit,
+  type MemberCheck,
+  type MemberLimits,
+  type PeakBendingStress,
+  type SpanDeflection,
+} from "../check/index.js";
+import { FlexuraError, isFlexuraError } from "../errors/index.js";
+import type { ModelCheck, ModelScale, ModelStress, ModelStressExtreme, ModelWarning } from "./analysis.js";
+import type { Model, ModelDeflectionLimit } from "./model.js";
+import type { SectionInSI } from "./model-section.js";
 
 const fmt = (x: number): string => String(Number(x.toPrecision(6)));
 
-/** Re-expands sum c_k t^k (t = x - a) about a + h: the Taylor shift, exact in the coefficients. */
-function shift(c: readonly number[], h: number): number[] {
-  return c.map((_, k) => {
-    let sum = 0;
-    let binomial = 1; // C(j, k) for j = k upward
-    let power = 1; // h^(j - k)
-    for (let j = k; j < c.length; j++) {
-      sum += binomial * (c[j] ?? 0) * power;
-      binomial = (binomial * (j + 1)) / (j + 1 - k);
-      power *= h;
-    }
-    return sum;
-  });
+/**
+ * A model's deflection limit as the check module's, in SI: `span/N` applies to cantilevers as
+ * their own length / N (factor 1, as the model format has always said).
+ */
+export function deflectionLimitInSI(limit: ModelDeflectionLimit, scale: ModelScale): DeflectionLimit {
+  return limit.kind === "ratio" ? { kind: "ratio", ratio: limit.ratio, cantileverFactor: 1 } : { kind: "absolute", limit: limit.value * scale.deflection };
 }
 
-/**
- * The deflection on [from, to] less the straight line through its values at `chordFrom` and
- * `chordTo` (the same point for a cantilever: less its support's deflection), as a new piecewise
- * polynomial on [from, to]. Rigid movement of the span on settling or springy supports drops out.
- */
-function relativeDeflection(pp: PiecewisePolynomial, from: number, to: number, chordFrom: number, chordTo: number): PiecewisePolynomial {
-  const a = evaluatePiecewise(pp, chordFrom);
-  const b = evaluatePiecewise(pp, chordTo);
-  const slope = chordTo === chordFrom ? 0 : (b - a) / (chordTo - chordFrom);
-  const stride = pp.degree + 1;
-  const breaks: number[] = [from];
-  const coefficients: number[] = [];
-  for (let i = 0; i + 1 < pp.breaks.length; i++) {
-    const lo = Math.max(pp.breaks[i] ?? 0, from);
-    const hi = Math.min(pp.breaks[i + 1] ?? 0, to);
-    if (!(hi > lo)) continue;
-    const local = shift(Array.from(pp.coefficients.subarray(i * stride, (i + 1) * stride)), lo - (pp.breaks[i] ?? 0));
-    local[0] = (local[0] ?? 0) - (a + slope * (lo - chordFrom));
-    if (stride > 1) local[1] = (local[1] ?? 0) - slope;
-    coefficients.push(...local);
-    breaks.push(hi);
-  }
-  return piecewisePolynomial(breaks, coefficients, pp.degree);
-}
-
-/**
- * Deflection checks: with a ratio limit (span/N), one per span and cantilever of the solution,
- * against its own length / N, the deflection taken relative to the span's supports (the chord
- * between them; for a cantilever, its support's deflection); with a length limit, one for the
- * whole member, on the deflection as computed.
- */
-export function deflectionChecks(model: Model, solution: BeamSolution, scale: ModelScale): ModelCheck[] {
-  const limit = model.limits.deflection;
-  if (limit === undefined) return [];
-  const { length: unit, deflection: unitD } = model.units;
-  const worst = (pp: PiecewisePolynomial, from: number, to: number): { demand: number; at: number } => {
-    const e = extremesOf(pp, from, to);
-    const down = -e.min.value;
-    const up = e.max.value;
-    return down >= up ? { demand: down / scale.deflection, at: e.min.at / scale.length } : { demand: up / scale.deflection, at: e.max.at / scale.length };
+/** The model's limits as the check module's, in SI (N/m^2, m). */
+export function memberLimitsInSI(model: Model, scale: ModelScale): MemberLimits {
+  const { deflection, bendingStress, shearStress } = model.limits;
+  return {
+    ...(deflection === undefined ? {} : { deflection: deflectionLimitInSI(deflection, scale) }),
+    ...(bendingStress === undefined ? {} : { bendingStress: bendingStress * scale.stress }),
+    ...(shearStress === undefined ? {} : { shearStress: shearStress * scale.stress }),
   };
-  if (limit.kind === "length") {
-    const w = worst(solution.deflection, 0, solution.length);
-    return [check("deflection", w.demand, limit.value, w.at, unitD, `deflection of the member against ${fmt(limit.value)} ${unitD}`)];
-  }
-  return solution.spans.map((span, i) => {
-    const [chordFrom, chordTo] = span.kind === "span" ? [span.from, span.to] : span.from === 0 ? [span.to, span.to] : [span.from, span.from];
-    const w = worst(relativeDeflection(solution.deflection, span.from, span.to, chordFrom, chordTo), span.from, span.to);
-    const from = span.from / scale.length;
-    const to = span.to / scale.length;
-    const capacity = (span.to - span.from) / limit.ratio / scale.deflection;
-    const what = span.kind === "span" ? `span ${i + 1}` : `cantilever ${i + 1}`;
-    return check("deflection", w.demand, capacity, w.at, unitD, `deflection of ${what} (${fmt(from)} to ${fmt(to)} ${unit}) against its length/${fmt(limit.ratio)}`);
-  });
 }
 
-/** Stress checks against the allowable stresses, for a model with a section. */
-export function stressChecks(model: Model, stress: ModelStress | undefined, warnings: ModelWarning[]): ModelCheck[] {
-  const out: ModelCheck[] = [];
-  const unit = model.units.stress;
-  const { bendingStress, shearStress } = model.limits;
-  if (stress === undefined) {
-    if (bendingStress !== undefined || shearStress !== undefined) {
-      warnings.push({ code: "stress-limit-without-section", message: 'The stress limits are not checked: give a "section" so that stresses can be computed.' });
+/** What the model reports of the checks: each check in model units, and the stresses when there is a section. */
+export interface ModelVerdicts {
+  /** The checks, in the model's units. */
+  readonly checks: ModelCheck[];
+  /** The peak stresses, when the model has a section. */
+  readonly stress?: ModelStress;
+}
+
+function deflectionDescription(model: Model, d: SpanDeflection, scale: ModelScale): string {
+  const limit = model.limits.deflection;
+  const what = `${d.spanKind} ${d.span + 1} (${fmt(d.from / scale.length)} to ${fmt(d.to / scale.length)} ${model.units.length})`;
+  const against = limit === undefined || limit.kind === "ratio" ? `its length/${fmt(limit?.ratio ?? 0)}` : `${fmt(limit.value)} ${model.units.deflection}`;
+  return `deflection of ${what} against ${against}`;
+}
+
+function inModelUnits(c: CheckResult, model: Model, scale: ModelScale, context: { deflections: readonly SpanDeflection[]; peaks?: readonly PeakBendingStress[] }): ModelCheck {
+  const base = { demand: 0, capacity: 0, utilisation: c.utilisation, pass: c.pass, at: c.at.x / scale.length };
+  const units = model.units;
+  switch (c.check) {
+    case "deflection": {
+      const d = context.deflections[c.at.span ?? 0];
+      const span = c.at.span ?? 0;
+      const description = d === undefined ? "deflection" : deflectionDescription(model, d, scale);
+      return { kind: "deflection", ...base, demand: c.demand / scale.deflection, capacity: c.capacity / scale.deflection, unit: units.deflection, description, span };
     }
-    return out;
+    case "bending-tension":
+    case "bending-compression": {
+      const sense = c.check === "bending-tension" ? "tension" : "compression";
+      const peak = context.peaks?.[sense === "tension" ? 0 : 1];
+      const inPart = peak === undefined || peak.part < 0 ? "" : ` in part ${peak.part}`;
+      const capacity = c.capacity / scale.stress;
+      return {
+        kind: c.check,
+        ...base,
+        demand: c.demand / scale.stress,
+        capacity,
+        unit: units.stress,
+        description: `extreme-fibre bending stress (${sense})${inPart} against ${fmt(capacity)} ${units.stress}`,
+        ...(c.at.fibre === undefined ? {} : { fibre: c.at.fibre }),
+        ...(c.at.y === undefined ? {} : { y: c.at.y / scale.sectionLength }),
+      };
+    }
+    case "shear-stress": {
+      const capacity = c.capacity / scale.stress;
+      return {
+        kind: "shear-stress",
+        ...base,
+        demand: c.demand / scale.stress,
+        capacity,
+        unit: units.stress,
+        description: `peak shear stress against ${fmt(capacity)} ${units.stress}`,
+        ...(c.at.y === undefined ? {} : { y: c.at.y / scale.sectionLength }),
+      };
+    }
+    default:
+      return c.check satisfies never;
   }
-  if (bendingStress !== undefined) {
-    const t = stress.tension;
-    const c = stress.compression;
-    const governing = t.value >= -c.value ? { demand: t.value, at: t.at, what: "tension" } : { demand: -c.value, at: c.at, what: "compression" };
-    out.push(check("bending-stress", governing.demand, bendingStress, governing.at, unit, `extreme-fibre bending stress (${governing.what}) against ${fmt(bendingStress)} ${unit}`));
+}
+
+function extremeOf(p: PeakBendingStress, scale: ModelScale): ModelStressExtreme {
+  return { value: p.stress / scale.stress, at: p.x / scale.length, y: p.y / scale.sectionLength, ...(p.part < 0 ? {} : { part: p.part }) };
+}
+
+function stressOf(r: MemberCheck, scale: ModelScale): ModelStress {
+  const s = r.stresses;
+  const v = s.shear;
+  return {
+    tension: extremeOf(s.tension, scale),
+    compression: extremeOf(s.compression, scale),
+    ...(v === null || v.shear === 0 ? {} : { shear: { value: v.stress / scale.stress, at: v.x / scale.length, y: v.y / scale.sectionLength } }),
+  };
+}
+
+/** Runs the check module on a member with a section; its problems are reported under `section`. */
+function withSection(model: Model, solution: BeamSolution, section: SectionInSI, scale: ModelScale): ModelVerdicts {
+  let r: MemberCheck;
+  try {
+    r = checkMember(solution, memberSection(section.geometry, section.referenceModulus === undefined ? undefined : { referenceModulus: section.referenceModulus }), memberLimitsInSI(model, scale));
+  } catch (e) {
+    if (!isFlexuraError(e)) throw e;
+    throw new FlexuraError(e.issues.map((i) => ({ ...i, path: i.path[0] === "limits" ? i.path : ["section"] })));
   }
-  if (shearStress !== undefined && stress.shear !== undefined) {
-    out.push(check("shear-stress", Math.abs(stress.shear.value), shearStress, stress.shear.at, unit, `peak shear stress against ${fmt(shearStress)} ${unit}`));
+  const peaks = [r.stresses.tension, r.stresses.compression];
+  // Deflection checks first, then stresses: the order the model's results have always had.
+  const ordered = [...r.checks.filter((c) => c.check === "deflection"), ...r.checks.filter((c) => c.check !== "deflection")];
+  return { checks: ordered.map((c) => inModelUnits(c, model, scale, { deflections: r.deflections, peaks })), stress: stressOf(r, scale) };
+}
+
+/**
+ * The model's checks and stresses, all decided by the check module: with a section,
+ * `checkMember` on the member in SI; without one, its deflection checks span by span (stress
+ * limits then cannot be checked: the warning `stress-limit-without-section` is added).
+ */
+export function modelVerdicts(model: Model, solution: BeamSolution, section: SectionInSI | undefined, scale: ModelScale, warnings: ModelWarning[]): ModelVerdicts {
+  if (section !== undefined) return withSection(model, solution, section, scale);
+  const { bendingStress, shearStress, deflection } = model.limits;
+  if (bendingStress !== undefined || shearStress !== undefined) {
+    warnings.push({ code: "stress-limit-without-section", message: 'The stress limits are not checked: give a "section" so that stresses can be computed.' });
   }
-  return out;
+  if (deflection === undefined) return { checks: [] };
+  const limit = deflectionLimitInSI(deflection, scale);
+  const deflections = spanDeflections(solution);
+  const checks = deflections.map((d) =>
+    checkDeflection(d.deflection, d.to - d.from, limit, { cantilever: d.spanKind === "cantilever", at: { x: d.at, span: d.span } }),
+  );
+  return { checks: checks.map((c) => inModelUnits(c, model, scale, { deflections })) };
 }

@@ -26,6 +26,7 @@ export type {
   ModelSectionResult,
   ModelStress,
   ModelStressExtreme,
+  ModelShearStressExtreme,
   ModelCheck,
   ModelWarning,
   ModelScale,

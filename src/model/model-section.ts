@@ -1,6 +1,5 @@
 import { FlexuraError, isFlexuraError } from "../errors/index.js";
 import { circle, iSection, pipe, rectangle, sectionProperties, tee, type Section, type SectionProperties } from "../section/index.js";
-import type { DepthBand } from "../stress/index.js";
 import type { ModelScale, ModelSectionResult } from "./analysis.js";
 import type { ModelSection } from "./model.js";
 
@@ -10,20 +9,8 @@ export interface SectionInSI {
   readonly geometry: Section;
   /** Its properties, in m, m^2, m^3, m^4. */
   readonly properties: SectionProperties;
-  /** Horizontal bands, y up from the centroid (m), for tau = V Q / (I b). */
-  readonly bands: readonly DepthBand[];
-}
-
-const rect = (yBottom: number, yTop: number, width: number): DepthBand => ({ kind: "trapezoid", yBottom, yTop, widthBottom: width, widthTop: width });
-
-/** Stacks rectangles of the given [height, width] from the bottom fibre, relative to the centroid. */
-function stack(bottom: number, layers: readonly (readonly [number, number])[]): DepthBand[] {
-  let y = bottom;
-  return layers.map(([height, width]) => {
-    const band = rect(y, y + height, width);
-    y += height;
-    return band;
-  });
+  /** The modulus of the reference material (Pa) for a section of several materials; absent for one material. */
+  readonly referenceModulus?: number;
 }
 
 function build(shape: string, d: Readonly<Record<string, number>>): Section {
@@ -51,40 +38,6 @@ function build(shape: string, d: Readonly<Record<string, number>>): Section {
   }
 }
 
-function bandsOf(shape: string, d: Readonly<Record<string, number>>, bottom: number): DepthBand[] {
-  const get = (name: string): number => d[name] ?? 0;
-  switch (shape) {
-    case "rectangle":
-      return [rect(bottom, bottom + get("depth"), get("width"))];
-    case "circle":
-      return [{ kind: "circle", centreY: bottom + get("diameter") / 2, radius: get("diameter") / 2 }];
-    case "pipe": {
-      const r = get("outsideDiameter") / 2;
-      return [
-        { kind: "circle", centreY: bottom + r, radius: r },
-        { kind: "circle", centreY: bottom + r, radius: r - get("wallThickness"), hole: true },
-      ];
-    }
-    case "i-section": {
-      const tf = get("flangeThickness");
-      const tfb = d["bottomFlangeThickness"] ?? tf;
-      const bfb = d["bottomFlangeWidth"] ?? get("flangeWidth");
-      return stack(bottom, [
-        [tfb, bfb],
-        [get("depth") - tf - tfb, get("webThickness")],
-        [tf, get("flangeWidth")],
-      ]);
-    }
-    case "tee":
-      return stack(bottom, [
-        [get("depth") - get("flangeThickness"), get("webThickness")],
-        [get("flangeThickness"), get("flangeWidth")],
-      ]);
-    default:
-      return [];
-  }
-}
-
 /**
  * Builds the model's section in SI from its dimensions (section-length unit), reporting the
  * section module's problems (a web wider than the flange, a wall thicker than the radius) under
@@ -95,8 +48,7 @@ export function sectionInSI(section: ModelSection, scale: ModelScale): SectionIn
   try {
     const geometry = build(section.shape, dims);
     const properties = sectionProperties(geometry);
-    const bottom = properties.extremes.bottom;
-    return { geometry, properties, bands: bandsOf(section.shape, dims, bottom) };
+    return { geometry, properties };
   } catch (e) {
     if (!isFlexuraError(e)) throw e;
     throw new FlexuraError(e.issues.map((i) => ({ ...i, path: ["section", ...(typeof i.path[0] === "string" && i.path[0] in section.dimensions ? i.path.slice(0, 1) : [])] })));

@@ -71,7 +71,7 @@ describe("analyzeModel with a section", () => {
     const gy = g.reduce((s, p) => s + p.A * p.y, 0) / gA;
     near(girder.section!.yBottom, gy);
     near(girder.section!.secondMomentZ, g.reduce((s, p) => s + p.I + p.A * (p.y - gy) ** 2, 0));
-    expect(girder.checks.map((c) => c.kind)).toEqual(["bending-stress", "shear-stress"]);
+    expect(girder.checks.map((c) => c.kind)).toEqual(["bending-tension", "bending-compression", "shear-stress"]);
   });
 });
 

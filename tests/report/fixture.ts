@@ -86,7 +86,7 @@ export function simpleSpanAnalysis(overrides: Partial<ModelAnalysis> = {}): Mode
     },
     checks: [
       { kind: "deflection", demand: -deflectionAtMid, capacity: (L * 1000) / 360, utilisation: -deflectionAtMid / ((L * 1000) / 360), pass: true, at: 3, unit: "mm", description: "deflection against span/360" },
-      { kind: "bending-stress", demand: 30, capacity: 165, utilisation: 30 / 165, pass: true, at: 3, unit: "MPa", description: "bending stress against allowable" },
+      { kind: "bending-tension", demand: 30, capacity: 165, utilisation: 30 / 165, pass: true, at: 3, unit: "MPa", description: "bending stress against allowable" },
     ],
     pass: true,
     diagrams: {

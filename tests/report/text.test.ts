@@ -89,7 +89,7 @@ describe("report parts", () => {
     expect(reportSection(bare)).toBe("");
     const { stress: _u, ...noStress } = simpleSpanAnalysis();
     expect(reportSection(noStress)).not.toContain("BENDING STRESS");
-    const withShear = simpleSpanAnalysis({ stress: { ...simpleSpanAnalysis().stress!, shear: { value: 1.5, at: 0 } } });
+    const withShear = simpleSpanAnalysis({ stress: { ...simpleSpanAnalysis().stress!, shear: { value: 1.5, at: 0, y: 0 } } });
     expect(reportSection(withShear)).toMatch(/largest shear stress\s+1\.5 MPa\s+x = 0 m/);
   });
   test("reportChecks counts failures, says when nothing was checked, and lists warnings", () => {
