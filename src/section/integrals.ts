@@ -20,18 +20,6 @@ export const M_ZZ = 4;
 /** \int y z dA. */
 export const M_YZ = 5;
 
-function addLine(out: Float64Array, w: number, z0: number, y0: number, z1: number, y1: number): void {
-  const d = (y1 - y0) * w;
-  if (d === 0) return;
-  const zz = z0 * z0 + z0 * z1 + z1 * z1;
-  out[M_AREA]! += (d * (z0 + z1)) / 2;
-  out[M_Y]! += (d * (2 * z0 * y0 + z0 * y1 + z1 * y0 + 2 * z1 * y1)) / 6;
-  out[M_Z]! += (d * zz) / 6;
-  out[M_YY]! += (d * (z0 * (3 * y0 * y0 + 2 * y0 * y1 + y1 * y1) + z1 * (y0 * y0 + 2 * y0 * y1 + 3 * y1 * y1))) / 12;
-  out[M_ZZ]! += (d * (z0 + z1) * (z0 * z0 + z1 * z1)) / 12;
-  out[M_YZ]! += (d * (y0 * (3 * z0 * z0 + 2 * z0 * z1 + z1 * z1) + y1 * (z0 * z0 + 2 * z0 * z1 + 3 * z1 * z1))) / 24;
-}
-
 // Antiderivatives at one angle, written into g: G[a,b] = \int cos^(a+1) sin^b.
 // Order: g0 = G00, g1 = G10, g2 = G01, g3 = G11, g4 = G02, g5 = G20, g6 = G12, g7 = G30, g8 = G21.
 function antiderivatives(g: Float64Array, offset: number, t: number): void {
@@ -81,17 +69,53 @@ function addArc(out: Float64Array, at: number, w: number, zc: number, yc: number
 
 /** Adds `w` times the moments of the region bounded by edges [from, to) into `out` (six moments, from index `at`). */
 export function addMoments(out: Float64Array, edges: Float64Array, from: number, to: number, w: number, at = 0): void {
+  addMomentsAbove(out, edges, from, to, w, -Infinity, at);
+}
+
+/**
+ * Adds `w` times the moments of the part of the region bounded by edges [from, to) that lies
+ * at or above y = cut into `out` (six moments, from index `at`).
+ */
+export function addMomentsAbove(out: Float64Array, edges: Float64Array, from: number, to: number, w: number, cut: number, at = 0): void {
   // straight edges accumulate in locals (the hot loop); arcs add straight into `out`
   let a = 0, my = 0, mz = 0, myy = 0, mzz = 0, myz = 0;
   for (let o = from * STRIDE, end = to * STRIDE; o < end; o += STRIDE) {
     if (edges[o] === ARC) {
-      addArc(out, at, w, edges[o + 1]!, edges[o + 2]!, edges[o + 3]!, edges[o + 4]!, edges[o + 5]!);
+      const zc = edges[o + 1]!;
+      const yc = edges[o + 2]!;
+      const r = edges[o + 3]!;
+      const t0 = edges[o + 4]!;
+      const t1 = edges[o + 5]!;
+      const h = (cut - yc) / r;
+      if (h <= -1) {
+        addArc(out, at, w, zc, yc, r, t0, t1);
+        continue;
+      }
+      if (h >= 1) continue;
+      const lo = t0 < t1 ? t0 : t1;
+      const hi = t0 < t1 ? t1 : t0;
+      let p = lo;
+      let q = hi;
+      // midpoint below pi/2: y rises with the angle
+      if (lo + hi < Math.PI) p = Math.max(lo, Math.asin(h));
+      else q = Math.min(hi, Math.PI - Math.asin(h));
+      if (p >= q) continue;
+      if (t0 < t1) addArc(out, at, w, zc, yc, r, p, q);
+      else addArc(out, at, w, zc, yc, r, q, p);
       continue;
     }
-    const z0 = edges[o + 1]!;
-    const y0 = edges[o + 2]!;
-    const z1 = edges[o + 3]!;
-    const y1 = edges[o + 4]!;
+    let z0 = edges[o + 1]!;
+    let y0 = edges[o + 2]!;
+    let z1 = edges[o + 3]!;
+    let y1 = edges[o + 4]!;
+    if (y0 < cut) {
+      if (y1 < cut) continue;
+      z0 = z0 + ((cut - y0) * (z1 - z0)) / (y1 - y0);
+      y0 = cut;
+    } else if (y1 < cut) {
+      z1 = z1 + ((cut - y1) * (z0 - z1)) / (y0 - y1);
+      y1 = cut;
+    }
     const d = y1 - y0;
     if (d === 0) continue;
     const z00 = z0 * z0;
@@ -113,53 +137,6 @@ export function addMoments(out: Float64Array, edges: Float64Array, from: number,
   out[at + M_YY]! += (w * myy) / 12;
   out[at + M_ZZ]! += (w * mzz) / 12;
   out[at + M_YZ]! += (w * myz) / 24;
-}
-
-/**
- * Adds `w` times the moments of the part of the region bounded by edges [from, to) that lies
- * at or above y = cut into `out`.
- */
-export function addMomentsAbove(out: Float64Array, edges: Float64Array, from: number, to: number, w: number, cut: number): void {
-  for (let e = from; e < to; e++) {
-    const o = e * STRIDE;
-    if (edges[o] === ARC) {
-      const zc = edges[o + 1]!;
-      const yc = edges[o + 2]!;
-      const r = edges[o + 3]!;
-      const t0 = edges[o + 4]!;
-      const t1 = edges[o + 5]!;
-      const lo = t0 < t1 ? t0 : t1;
-      const hi = t0 < t1 ? t1 : t0;
-      const h = (cut - yc) / r;
-      if (h <= -1) {
-        addArc(out, 0, w, zc, yc, r, t0, t1);
-        continue;
-      }
-      if (h >= 1) continue;
-      const right = lo + hi < Math.PI; // midpoint below pi/2: y rises with the angle
-      let a = lo;
-      let b = hi;
-      if (right) a = Math.max(lo, Math.asin(h));
-      else b = Math.min(hi, Math.PI - Math.asin(h));
-      if (a >= b) continue;
-      if (t0 < t1) addArc(out, 0, w, zc, yc, r, a, b);
-      else addArc(out, 0, w, zc, yc, r, b, a);
-    } else {
-      let z0 = edges[o + 1]!;
-      let y0 = edges[o + 2]!;
-      let z1 = edges[o + 3]!;
-      let y1 = edges[o + 4]!;
-      if (y0 < cut && y1 < cut) continue;
-      if (y0 < cut) {
-        z0 = z0 + ((cut - y0) * (z1 - z0)) / (y1 - y0);
-        y0 = cut;
-      } else if (y1 < cut) {
-        z1 = z1 + ((cut - y1) * (z0 - z1)) / (y0 - y1);
-        y1 = cut;
-      }
-      addLine(out, w, z0, y0, z1, y1);
-    }
-  }
 }
 
 /**

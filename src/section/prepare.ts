@@ -130,34 +130,31 @@ function compile(section: Section, found: IssueCollector): PreparedSection | und
   const weights = take(count);
   const edgeStart = new Int32Array(buffer, at, count + 1);
   edgeStart.set(starts);
-  box[0] = Infinity;
-  box[1] = -Infinity;
-  box[2] = Infinity;
-  box[3] = -Infinity;
+  box.set([Infinity, -Infinity, Infinity, -Infinity]);
   for (let i = 0; i < count; i++) {
     edgeBox(list, edgeStart[i]!, edgeStart[i + 1]!, partBox, i * 4);
     const hole = parts[i]?.hole === true;
     sign[i] = hole ? -1 : 1;
     if (hole) continue;
-    box[0] = Math.min(box[0], partBox[i * 4]!);
-    box[1] = Math.max(box[1], partBox[i * 4 + 1]!);
-    box[2] = Math.min(box[2], partBox[i * 4 + 2]!);
-    box[3] = Math.max(box[3], partBox[i * 4 + 3]!);
+    box[0] = Math.min(box[0]!, partBox[i * 4]!);
+    box[1] = Math.max(box[1]!, partBox[i * 4 + 1]!);
+    box[2] = Math.min(box[2]!, partBox[i * 4 + 2]!);
+    box[3] = Math.max(box[3]!, partBox[i * 4 + 3]!);
   }
-  if (!(box[0] < box[1])) {
+  if (!(box[0]! < box[1]!)) {
     found.add("section-no-solid", ["parts"], "Every part is a hole; add the solid parts.");
     return undefined;
   }
-  const refZ = (box[0] + box[1]) / 2;
-  const refY = (box[2] + box[3]) / 2;
+  const refZ = (box[0]! + box[1]!) / 2;
+  const refY = (box[2]! + box[3]!) / 2;
+  edges.set(list);
   for (let e = 0; e < list.length; e += STRIDE) {
-    const arc = list[e] === ARC;
-    edges[e] = list[e]!;
-    edges[e + 1] = list[e + 1]! - refZ;
-    edges[e + 2] = list[e + 2]! - refY;
-    edges[e + 3] = arc ? list[e + 3]! : list[e + 3]! - refZ;
-    edges[e + 4] = arc ? list[e + 4]! : list[e + 4]! - refY;
-    edges[e + 5] = list[e + 5]!;
+    edges[e + 1]! -= refZ;
+    edges[e + 2]! -= refY;
+    if (list[e] !== ARC) {
+      edges[e + 3]! -= refZ;
+      edges[e + 4]! -= refY;
+    }
   }
   for (let i = 0; i < count; i++) {
     partBox[i * 4]! -= refZ;
@@ -165,11 +162,11 @@ function compile(section: Section, found: IssueCollector): PreparedSection | und
     partBox[i * 4 + 2]! -= refY;
     partBox[i * 4 + 3]! -= refY;
   }
-  box[0] -= refZ;
-  box[1] -= refZ;
-  box[2] -= refY;
-  box[3] -= refY;
-  const tolerance = 1e-9 * Math.max(box[1] - box[0], box[3] - box[2]);
+  box[0]! -= refZ;
+  box[1]! -= refZ;
+  box[2]! -= refY;
+  box[3]! -= refY;
+  const tolerance = 1e-9 * Math.max(box[1]! - box[0]!, box[3]! - box[2]!);
 
   // materials: all solid parts have one, or none does
   modulus.fill(Number.NaN);
@@ -241,7 +238,7 @@ function compile(section: Section, found: IssueCollector): PreparedSection | und
     addMoments(partMoments, edges, edgeStart[i]!, edgeStart[i + 1]!, 1, i * 6);
     netArea += sign[i]! * partMoments[i * 6]!;
   }
-  if (found.empty && !(netArea > 1e-12 * (box[1] - box[0]) * (box[3] - box[2]))) {
+  if (found.empty && !(netArea > 1e-12 * (box[1]! - box[0]!) * (box[3]! - box[2]!))) {
     found.add("section-area-not-positive", ["parts"], `The holes take away all of the area; they must not overlap or cover the solids.`, { area: netArea });
   }
   if (!found.empty) return undefined;

@@ -138,10 +138,9 @@ export function validatePart(found: IssueCollector, part: unknown, path: IssuePa
     case "sector": {
       checkPoint(found, part["centre"], path, "centre", "centre");
       checkPositive(found, part["radius"], path, "radius", "radius");
-      if (!isFiniteNumber(part["startAngle"])) requireFinite(found, part["startAngle"], [...path, "startAngle"], "start angle");
+      requireFinite(found, part["startAngle"], [...path, "startAngle"], "start angle");
       const sweep = part["sweep"];
-      if (!isFiniteNumber(sweep)) requireFinite(found, sweep, [...path, "sweep"], "sweep");
-      else if (!(sweep > 0 && sweep <= 2 * Math.PI)) {
+      if (requireFinite(found, sweep, [...path, "sweep"], "sweep") && !(sweep > 0 && sweep <= 2 * Math.PI)) {
         found.add("sector-sweep-out-of-range", [...path, "sweep"], `The sweep must be in (0, 2 pi]; got ${sweep}.`, { sweep });
       }
       break;
@@ -149,7 +148,7 @@ export function validatePart(found: IssueCollector, part: unknown, path: IssuePa
     case "fillet":
       checkPoint(found, part["corner"], path, "corner", "corner");
       checkPositive(found, part["radius"], path, "radius", "radius");
-      if (!isFiniteNumber(part["orientation"])) requireFinite(found, part["orientation"], [...path, "orientation"], "orientation");
+      requireFinite(found, part["orientation"], [...path, "orientation"], "orientation");
       break;
     default:
       found.add("part-kind-unknown", [...path, "kind"], `Unknown part kind ${describeValue(kind)}; use "polygon", "circle", "sector" or "fillet".`, { kind: describeValue(kind) });
