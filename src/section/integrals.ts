@@ -77,8 +77,6 @@ export function addMoments(out: Float64Array, edges: Float64Array, from: number,
  * at or above y = cut into `out` (six moments, from index `at`).
  */
 export function addMomentsAbove(out: Float64Array, edges: Float64Array, from: number, to: number, w: number, cut: number, at = 0): void {
-  // straight edges accumulate in locals (the hot loop); arcs add straight into `out`
-  let a = 0, my = 0, mz = 0, myy = 0, mzz = 0, myz = 0;
   for (let o = from * STRIDE, end = to * STRIDE; o < end; o += STRIDE) {
     if (edges[o] === ARC) {
       const zc = edges[o + 1]!;
@@ -116,7 +114,7 @@ export function addMomentsAbove(out: Float64Array, edges: Float64Array, from: nu
       z1 = z1 + ((cut - y1) * (z0 - z1)) / (y0 - y1);
       y1 = cut;
     }
-    const d = y1 - y0;
+    const d = (y1 - y0) * w;
     if (d === 0) continue;
     const z00 = z0 * z0;
     const z01 = z0 * z1;
@@ -124,19 +122,13 @@ export function addMomentsAbove(out: Float64Array, edges: Float64Array, from: nu
     const y00 = y0 * y0;
     const y01 = y0 * y1;
     const y11 = y1 * y1;
-    a += d * (z0 + z1);
-    my += d * (2 * z0 * y0 + z0 * y1 + z1 * y0 + 2 * z1 * y1);
-    mz += d * (z00 + z01 + z11);
-    myy += d * (z0 * (3 * y00 + 2 * y01 + y11) + z1 * (y00 + 2 * y01 + 3 * y11));
-    mzz += d * (z0 + z1) * (z00 + z11);
-    myz += d * (y0 * (3 * z00 + 2 * z01 + z11) + y1 * (z00 + 2 * z01 + 3 * z11));
+    out[at + M_AREA]! += (d * (z0 + z1)) / 2;
+    out[at + M_Y]! += (d * (2 * z0 * y0 + z0 * y1 + z1 * y0 + 2 * z1 * y1)) / 6;
+    out[at + M_Z]! += (d * (z00 + z01 + z11)) / 6;
+    out[at + M_YY]! += (d * (z0 * (3 * y00 + 2 * y01 + y11) + z1 * (y00 + 2 * y01 + 3 * y11))) / 12;
+    out[at + M_ZZ]! += (d * (z0 + z1) * (z00 + z11)) / 12;
+    out[at + M_YZ]! += (d * (y0 * (3 * z00 + 2 * z01 + z11) + y1 * (z00 + 2 * z01 + 3 * z11))) / 24;
   }
-  out[at + M_AREA]! += (w * a) / 2;
-  out[at + M_Y]! += (w * my) / 6;
-  out[at + M_Z]! += (w * mz) / 6;
-  out[at + M_YY]! += (w * myy) / 12;
-  out[at + M_ZZ]! += (w * mzz) / 12;
-  out[at + M_YZ]! += (w * myz) / 24;
 }
 
 /**
