@@ -57,3 +57,19 @@ export function continuous(spans: number): BeamInput {
   }
   return { length: spans * L, stiffness: 4e4, supports, loads };
 }
+
+/** A simple span carrying `count` point loads spread along it (a train of wheel loads, say). */
+export function manyPointLoads(count: number): BeamInput {
+  const L = 12;
+  const loads: Load[] = [];
+  for (let i = 0; i < count; i++) loads.push({ kind: "point", at: (L * (i + 0.5)) / count, value: 5 + (i % 3) });
+  return {
+    length: L,
+    stiffness: 6e4,
+    supports: [
+      { kind: "pin", at: 0 },
+      { kind: "roller", at: L },
+    ],
+    loads,
+  };
+}

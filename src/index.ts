@@ -7,7 +7,6 @@
  * @packageDocumentation
  */
 export * from "./errors/index.js";
-export * from "./units/index.js";
 // The beam engine, its input and result types, and the evaluators a caller needs to read a
 // solution. The rest of the piecewise-polynomial toolkit and the load builders are served from
 // `flexura/beam`, to keep the main entry within its size budget (scripts/size-check.mjs).
@@ -18,5 +17,8 @@ export type { PointLoad, CoupleLoad, DistributedLoad, Load, LoadResultant } from
 export type { Support, SupportKind } from "./supports/index.js";
 export * from "./section/index.js";
 export * from "./stress/index.js";
+// Units (quantities read from text, exact conversion factors, decimal.js) are served from
+// `flexura/units` only: the engines work in any consistent units and never need them, and the
+// model format (`flexura/model`) brings them along itself.
 // The member checks are served from `flexura/check` only: re-exporting them here would put the
 // main entry over its size budget (scripts/size-check.mjs).

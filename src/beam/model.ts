@@ -4,41 +4,77 @@ import type { BeamInput, SolveOptions } from "./types.js";
 import { SAME_POINT } from "./validate.js";
 
 /**
- * The discretised member: nodes at the ends, supports, hinges, stiffness steps and load points,
- * joined by elements of constant E I each carrying one linearly varying distributed load.
+ * The discretised member, on two levels.
+ *
+ * Pieces: breakpoints at the ends, supports, hinges, stiffness steps and load ends, so that the
+ * load on each piece is one linear function and the diagrams are one polynomial per piece.
+ *
+ * Elements: the stretches between structural nodes only (the ends, supports, hinges and
+ * stiffness steps), each of constant E I and carrying all the loads inside it through its exact
+ * fixed-end actions. The stiffness system is as small as the structure allows, however many
+ * loads there are, and no load makes a short, stiff element.
+ *
  * Apart from `x` and `output`, the arrays are working storage that may be longer than needed
- * (index them by node, element or support; never read their length).
+ * (index them; never read their length).
  */
 export interface BeamModel {
-  /** Number of nodes. */
+  /** Number of breakpoints (pieces + 1). */
   readonly nodes: number;
-  /** Node positions, increasing; first 0, last the length. */
+  /** Breakpoints, increasing; first 0, last the length. */
   readonly x: Float64Array;
   /**
    * Storage for the results, allocated once per solve: `x` (the breakpoints) at its start, then
-   * the coefficients of shear, moment, slope and deflection, 3, 4, 5 and 6 per element.
+   * the coefficients of shear, moment, slope and deflection, 3, 4, 5 and 6 per piece.
    */
   readonly output: Float64Array;
-  /** E I of each element. */
-  readonly ei: Float64Array;
-  /** Downward load intensity at the left and right end of each element. */
+  /** Downward load intensity at the left and right end of each piece. */
   readonly wLeft: Float64Array;
   readonly wRight: Float64Array;
-  /** 1 where the element's right end is released (a hinge at its right node). */
-  readonly released: Uint8Array;
-  /** Downward point force and counterclockwise couple applied at each node. */
+  /** Downward point force and counterclockwise couple applied at each breakpoint. */
   readonly force: Float64Array;
   readonly couple: Float64Array;
-  /** Node of each support, by support index. */
+  /** Number of structural nodes (elements + 1). */
+  readonly joints: number;
+  /** Breakpoint index of each structural node, increasing; first 0, last `nodes - 1`. */
+  readonly joint: Int32Array;
+  /** E I of each element. */
+  readonly ei: Float64Array;
+  /** 1 where the element's right end is released (a hinge at its right node). */
+  readonly released: Uint8Array;
+  /** Structural node of each support, by support index. */
   readonly supportNode: Int32Array;
   /** The loads that act, with their factors applied. */
   readonly loads: readonly Load[];
 }
 
-/** Index of the node nearest to `x` (nodes sorted). */
-export function nodeIndex(nodes: Float64Array, count: number, x: number): number {
-  let lo = 0;
-  let hi = count - 1;
+/**
+ * Index of the breakpoint nearest to `x` (breakpoints sorted), searching outwards from `hint`
+ * (galloping, then bisection): O(1) when successive calls move forward in small steps, as
+ * sorted loads and supports do, and O(log n) at worst.
+ */
+export function nodeIndex(nodes: Float64Array, count: number, x: number, hint = 0): number {
+  let lo = hint < 0 ? 0 : hint > count - 2 ? Math.max(count - 2, 0) : hint;
+  let hi: number;
+  if ((nodes[lo] as number) <= x) {
+    // gallop right until nodes[hi] > x
+    let step = 1;
+    hi = lo + 1;
+    while (hi < count - 1 && (nodes[hi] as number) <= x) {
+      lo = hi;
+      hi = Math.min(hi + step, count - 1);
+      step *= 2;
+    }
+  } else {
+    // gallop left until nodes[lo] <= x
+    let step = 1;
+    hi = lo;
+    lo = Math.max(lo - 1, 0);
+    while (lo > 0 && (nodes[lo] as number) > x) {
+      hi = lo;
+      lo = Math.max(lo - step, 0);
+      step *= 2;
+    }
+  }
   while (hi - lo > 1) {
     const mid = (lo + hi) >> 1;
     if ((nodes[mid] as number) <= x) lo = mid;
@@ -47,21 +83,53 @@ export function nodeIndex(nodes: Float64Array, count: number, x: number): number
   return x - (nodes[lo] as number) <= (nodes[hi] as number) - x ? lo : hi;
 }
 
-/** Sorts `a[0 .. count - 1]` ascending in place (insertion sort when short, the built-in sort otherwise). */
-function sortPrefix(a: Float64Array, count: number): void {
-  if (count > 32) {
-    a.subarray(0, count).sort();
+/**
+ * Sorts `a[0 .. count - 1]` ascending in place. Short lists by insertion; long ones by a natural
+ * merge sort through `spare` (at least `count` long): the candidates arrive as a few sorted runs
+ * (supports, hinges, steps, loads, each usually in order), so this is close to linear.
+ */
+function sortPrefix(a: Float64Array, count: number, spare: Float64Array): void {
+  if (count <= 32) {
+    for (let i = 1; i < count; i++) {
+      const v = a[i] as number;
+      let j = i - 1;
+      while (j >= 0 && (a[j] as number) > v) {
+        a[j + 1] = a[j] as number;
+        j--;
+      }
+      a[j + 1] = v;
+    }
     return;
   }
-  for (let i = 1; i < count; i++) {
-    const v = a[i] as number;
-    let j = i - 1;
-    while (j >= 0 && (a[j] as number) > v) {
-      a[j + 1] = a[j] as number;
-      j--;
+  let src = a;
+  let dst = spare;
+  for (;;) {
+    // one pass: merge neighbouring ascending runs pairwise from src into dst
+    let runs = 0;
+    let i = 0;
+    while (i < count) {
+      let mid = i + 1;
+      while (mid < count && (src[mid] as number) >= (src[mid - 1] as number)) mid++;
+      let end = mid;
+      if (mid < count) {
+        end = mid + 1;
+        while (end < count && (src[end] as number) >= (src[end - 1] as number)) end++;
+      }
+      let p = i;
+      let q = mid;
+      let k = i;
+      while (p < mid && q < end) dst[k++] = (src[p] as number) <= (src[q] as number) ? (src[p++] as number) : (src[q++] as number);
+      while (p < mid) dst[k++] = src[p++] as number;
+      while (q < end) dst[k++] = src[q++] as number;
+      runs++;
+      i = end;
     }
-    a[j + 1] = v;
+    const t = src;
+    src = dst;
+    dst = t;
+    if (runs <= 1) break;
   }
+  if (src !== a) a.set(src.subarray(0, count));
 }
 
 function factored(loads: readonly Load[], options: SolveOptions | undefined): readonly Load[] {
@@ -86,10 +154,9 @@ function factored(loads: readonly Load[], options: SolveOptions | undefined): re
   return out;
 }
 
-/** Builds the nodes and elements of a validated member. */
-export function buildModel(beam: BeamInput, options: SolveOptions | undefined, scratch: Scratch): BeamModel {
+/** The sorted, merged breakpoints of a member: ends, supports, hinges, steps and load ends. */
+function breakpoints(beam: BeamInput, loads: readonly Load[], scratch: Scratch): number {
   const length = beam.length;
-  const loads = factored(beam.loads ?? [], options);
   const hinges = beam.hinges ?? [];
   const steps = typeof beam.stiffness === "number" ? [] : beam.stiffness;
   let count = 2 + beam.supports.length + hinges.length + steps.length;
@@ -109,34 +176,60 @@ export function buildModel(beam: BeamInput, options: SolveOptions | undefined, s
     } else raw[k++] = l.at;
   }
   for (let i = 0; i < count; i++) raw[i] = Math.min(Math.max(raw[i] as number, 0), length);
-  sortPrefix(raw, count);
-  // merge points closer than the tolerance; the last node is exactly the length
+  sortPrefix(raw, count, scratch.spare);
+  // merge points closer than the tolerance; the last one is exactly the length
   const tol = SAME_POINT * length;
   let n = 1;
   for (let i = 1; i < count; i++) if ((raw[i] as number) - (raw[n - 1] as number) > tol) raw[n++] = raw[i] as number;
   if (n === 1) n = 2;
   raw[n - 1] = length;
-  const elements = n - 1;
-  const output = takeOutput(n + 18 * elements);
+  return n;
+}
+
+/** Builds the pieces and elements of a validated member. */
+export function buildModel(beam: BeamInput, options: SolveOptions | undefined, scratch: Scratch): BeamModel {
+  const loads = factored(beam.loads ?? [], options);
+  const hinges = beam.hinges ?? [];
+  const steps = typeof beam.stiffness === "number" ? [] : beam.stiffness;
+  const n = breakpoints(beam, loads, scratch);
+  const pieces = n - 1;
+  const output = takeOutput(n + 18 * pieces);
+  const raw = scratch.raw;
   for (let i = 0; i < n; i++) output[i] = raw[i] as number;
   const x = output.subarray(0, n);
-
   ensureNodes(scratch, n, beam.supports.length);
+
+  // structural nodes: mark them (2 = a hinge), then list them in order
+  const mark = scratch.mark;
+  mark[0] = 1;
+  mark[n - 1] = 1;
+  let hint = 0;
+  const flag = (at: number, bit: number): void => {
+    const i = (hint = nodeIndex(x, n, at, hint));
+    mark[i] = (mark[i] as number) | bit;
+  };
+  for (const s of beam.supports) flag(s.at, 1);
+  for (const s of steps) flag(s.to, 1);
+  for (const h of hinges) flag(h, 2);
+  const joint = scratch.joint;
+  const jointOf = scratch.jointOf;
+  let m = 0;
+  for (let i = 0; i < n; i++) {
+    if (mark[i] === 0) continue;
+    jointOf[i] = m;
+    joint[m++] = i;
+  }
   const ei = scratch.ei;
-  if (typeof beam.stiffness === "number") ei.fill(beam.stiffness, 0, elements);
-  else {
-    let s = 0;
-    for (let e = 0; e < elements; e++) {
-      const mid = 0.5 * ((x[e] as number) + (x[e + 1] as number));
+  const released = scratch.released;
+  let s = 0;
+  for (let e = 0; e + 1 < m; e++) {
+    released[e] = ((mark[joint[e + 1] as number] as number) & 2) >> 1;
+    if (typeof beam.stiffness === "number") ei[e] = beam.stiffness;
+    else {
+      const mid = 0.5 * ((x[joint[e] as number] as number) + (x[joint[e + 1] as number] as number));
       while (s < steps.length - 1 && (steps[s] as { to: number }).to <= mid) s++;
       ei[e] = (steps[s] as { stiffness: number }).stiffness;
     }
-  }
-
-  const released = scratch.released;
-  for (const h of hinges) {
-    const node = nodeIndex(x, n, h);
-    released[node - 1] = 1;
   }
 
   const wLeft = scratch.wLeft;
@@ -145,21 +238,19 @@ export function buildModel(beam: BeamInput, options: SolveOptions | undefined, s
   const couple = scratch.couple;
   for (const l of loads) {
     switch (l.kind) {
-      case "point":
-        {
-        const i = nodeIndex(x, n, l.at);
+      case "point": {
+        const i = (hint = nodeIndex(x, n, l.at, hint));
         force[i] = (force[i] as number) + l.value;
-        }
         break;
-      case "couple":
-        {
-        const i = nodeIndex(x, n, l.at);
+      }
+      case "couple": {
+        const i = (hint = nodeIndex(x, n, l.at, hint));
         couple[i] = (couple[i] as number) + l.value;
-        }
         break;
+      }
       case "distributed": {
-        const a = nodeIndex(x, n, l.from);
-        const b = nodeIndex(x, n, l.to);
+        const a = nodeIndex(x, n, l.from, hint);
+        const b = (hint = nodeIndex(x, n, l.to, a));
         const slope = (l.end - l.start) / (l.to - l.from);
         for (let e = a; e < b; e++) {
           wLeft[e] = (wLeft[e] as number) + l.start + slope * ((x[e] as number) - l.from);
@@ -173,6 +264,10 @@ export function buildModel(beam: BeamInput, options: SolveOptions | undefined, s
   }
 
   const supportNode = scratch.supportNode;
-  for (let i = 0; i < beam.supports.length; i++) supportNode[i] = nodeIndex(x, n, (beam.supports[i] as { at: number }).at);
-  return { nodes: n, x, output, ei, wLeft, wRight, released, force, couple, supportNode, loads };
+  hint = 0;
+  for (let i = 0; i < beam.supports.length; i++) {
+    hint = nodeIndex(x, n, (beam.supports[i] as { at: number }).at, hint);
+    supportNode[i] = jointOf[hint] as number;
+  }
+  return { nodes: n, x, output, wLeft, wRight, force, couple, joints: m, joint, ei, released, supportNode, loads };
 }

@@ -14,55 +14,69 @@ export interface Diagrams {
 }
 
 /**
- * Exact recovery on each element from its left-end state (deflection v1, rotation t1, end
- * force Q1 up and end moment M1 counterclockwise on the element) and its load
- * w(t) = a0 + a1 t (down), with t measured from the element's left end:
- *   V = Q1 - a0 t - a1 t^2 / 2,  M = -M1 + Q1 t - a0 t^2 / 2 - a1 t^3 / 6,
- *   slope = t1 + (1 / EI) int M,  deflection = v1 + int slope.
+ * Exact recovery on each piece, carried across each element from its left-end state (deflection
+ * v, rotation r, end force Q up and end moment M1 counterclockwise on the element, so shear
+ * V = Q and moment M = -M1 there). On a piece with load w(t) = a0 + a1 t (down), t from its
+ * left end:
+ *   V = V0 - a0 t - a1 t^2 / 2,  M = M0 + V0 t - a0 t^2 / 2 - a1 t^3 / 6,
+ *   slope = r0 + (1 / EI) int M,  deflection = v0 + int slope;
+ * at a breakpoint inside the element, a point force P (down) lowers the shear by P and a
+ * couple C (counterclockwise) lowers the moment by C.
  */
 export function recoverDiagrams(model: BeamModel, result: StiffnessResult): Diagrams {
-  const elements = model.nodes - 1;
+  const pieces = model.nodes - 1;
   // one allocation for all four (made by buildModel), after the breakpoints
   let at = model.nodes;
-  const shear = model.output.subarray(at, (at += elements * 3));
-  const moment = model.output.subarray(at, (at += elements * 4));
-  const slope = model.output.subarray(at, (at += elements * 5));
-  const deflection = model.output.subarray(at, at + elements * 6);
+  const shear = model.output.subarray(at, (at += pieces * 3));
+  const moment = model.output.subarray(at, (at += pieces * 4));
+  const slope = model.output.subarray(at, (at += pieces * 5));
+  const deflection = model.output.subarray(at, at + pieces * 6);
   const d = result.displacements;
   const q = result.endForces;
-  for (let e = 0; e < elements; e++) {
-    const h = (model.x[e + 1] as number) - (model.x[e] as number);
-    const a0 = model.wLeft[e] as number;
-    const a1 = ((model.wRight[e] as number) - a0) / h;
-    const q1 = q[4 * e] as number;
-    const m1 = q[4 * e + 1] as number;
-    const v1 = d[2 * e] as number;
-    const t1 = d[2 * e + 1] as number;
-    const ei = model.ei[e] as number;
-    let o = 3 * e;
-    shear[o] = q1;
-    shear[o + 1] = -a0;
-    shear[o + 2] = -a1 / 2;
-    o = 4 * e;
-    moment[o] = -m1;
-    moment[o + 1] = q1;
-    moment[o + 2] = -a0 / 2;
-    moment[o + 3] = -a1 / 6;
-    o = 5 * e;
-    slope[o] = t1;
-    slope[o + 1] = -m1 / ei;
-    slope[o + 2] = q1 / (2 * ei);
-    slope[o + 3] = -a0 / (6 * ei);
-    slope[o + 4] = -a1 / (24 * ei);
-    o = 6 * e;
-    deflection[o] = v1;
-    deflection[o + 1] = t1;
-    deflection[o + 2] = -m1 / (2 * ei);
-    deflection[o + 3] = q1 / (6 * ei);
-    deflection[o + 4] = -a0 / (24 * ei);
-    deflection[o + 5] = -a1 / (120 * ei);
-  }
   const x = model.x;
+  for (let e = 0; e + 1 < model.joints; e++) {
+    const first = model.joint[e] as number;
+    const last = model.joint[e + 1] as number;
+    const ei = model.ei[e] as number;
+    let v = q[4 * e] as number;
+    let m = -(q[4 * e + 1] as number);
+    let r = d[2 * e + 1] as number;
+    let y = d[2 * e] as number;
+    for (let i = first; i < last; i++) {
+      const h = (x[i + 1] as number) - (x[i] as number);
+      const a0 = model.wLeft[i] as number;
+      const dw = (model.wRight[i] as number) - a0;
+      const a1 = dw / h;
+      let o = 3 * i;
+      shear[o] = v;
+      shear[o + 1] = -a0;
+      shear[o + 2] = -a1 / 2;
+      o = 4 * i;
+      moment[o] = m;
+      moment[o + 1] = v;
+      moment[o + 2] = -a0 / 2;
+      moment[o + 3] = -a1 / 6;
+      o = 5 * i;
+      slope[o] = r;
+      slope[o + 1] = m / ei;
+      slope[o + 2] = v / (2 * ei);
+      slope[o + 3] = -a0 / (6 * ei);
+      slope[o + 4] = -a1 / (24 * ei);
+      o = 6 * i;
+      deflection[o] = y;
+      deflection[o + 1] = r;
+      deflection[o + 2] = m / (2 * ei);
+      deflection[o + 3] = v / (6 * ei);
+      deflection[o + 4] = -a0 / (24 * ei);
+      deflection[o + 5] = -a1 / (120 * ei);
+      if (i + 1 === last) break;
+      // carry the state to the next breakpoint (the same sums as evaluating the four polynomials at h)
+      y += h * (r + (h * (m / 2 + h * (v / 6 - h * (a0 / 24 + dw / 120)))) / ei);
+      r += (h * (m + h * (v / 2 - h * (a0 / 6 + dw / 24)))) / ei;
+      m += h * (v - h * (a0 / 2 + dw / 6)) - (model.couple[i + 1] as number);
+      v -= h * (a0 + dw / 2) + (model.force[i + 1] as number);
+    }
+  }
   return {
     shear: makePiecewise(x, shear, 2),
     moment: makePiecewise(x, moment, 3),
@@ -71,23 +85,24 @@ export function recoverDiagrams(model: BeamModel, result: StiffnessResult): Diag
   };
 }
 
-/** Reactions from node equilibrium: the node's load plus the forces the elements take from it. */
+/** Reactions from equilibrium of each support's structural node: its load plus the forces the elements take from it. */
 export function recoverReactions(model: BeamModel, result: StiffnessResult, supports: readonly Support[]): Reaction[] {
   const q = result.endForces;
-  const last = model.nodes - 1;
+  const last = model.joints - 1;
   const out: Reaction[] = [];
   for (let s = 0; s < supports.length; s++) {
     const sup = supports[s] as Support;
     const node = model.supportNode[s] as number;
+    const at = model.joint[node] as number;
     let force = 0;
     let moment = 0;
     if (restrainsDeflection(sup)) {
-      force = model.force[node] as number;
+      force = model.force[at] as number;
       if (node > 0) force += q[4 * (node - 1) + 2] as number;
       if (node < last) force += q[4 * node] as number;
     }
     if (restrainsRotation(sup)) {
-      moment = -(model.couple[node] as number);
+      moment = -(model.couple[at] as number);
       if (node > 0) moment += q[4 * (node - 1) + 3] as number;
       if (node < last) moment += q[4 * node + 1] as number;
     }

@@ -1,49 +1,8 @@
-import { evaluatePolynomial, type PiecewisePolynomial } from "../math/index.js";
-import { clearOfZero, rootsToScratch, scratchRoots } from "../math/polynomial.js";
 import { restrainsDeflection, type Support } from "../supports/index.js";
 import type { BeamModel } from "./model.js";
+import type { Scratch } from "./scratch.js";
 import type { StiffnessResult } from "./stiffness.js";
 import type { BeamSpan, BeamWarning } from "./types.js";
-
-/**
- * Points where the moment changes sign, excluding the ends: on each piece the real roots split
- * it into stretches of one sign (judged at each stretch's midpoint); a sign change between
- * neighbouring stretches is a point of contraflexure. Stretches whose moment is zero to
- * rounding (relative to the largest moment) are skipped, so an unloaded overhang or a hinge
- * where the moment only touches zero gives none. A jump across zero at an applied couple counts.
- */
-export function contraflexurePoints(moment: PiecewisePolynomial, scale: number): number[] {
-  const b = moment.breaks;
-  const c = moment.coefficients;
-  const d = moment.degree;
-  const stride = d + 1;
-  const zero = 1e-10 * scale;
-  const gap = 1e-8 * ((b[b.length - 1] as number) - (b[0] as number));
-  const out: number[] = [];
-  let lastSign = 0;
-  let lastEnd = 0;
-  for (let i = 0; i + 1 < b.length; i++) {
-    const x0 = b[i] as number;
-    const h = (b[i + 1] as number) - x0;
-    const count = clearOfZero(c, i * stride, d, h) ? 0 : rootsToScratch(c, i * stride, d, 0, h);
-    let start = 0;
-    for (let r = 0; r <= count; r++) {
-      const end = r < count ? (scratchRoots[r] as number) : h;
-      if (end > start) {
-        const v = evaluatePolynomial(c, i * stride, d, 0.5 * (start + end));
-        const sign = v > zero ? 1 : v < -zero ? -1 : 0;
-        if (sign !== 0) {
-          const here = x0 + start;
-          if (lastSign !== 0 && sign !== lastSign && here - lastEnd <= gap) out.push(0.5 * (here + lastEnd));
-          lastSign = sign;
-          lastEnd = x0 + end;
-        }
-      }
-      start = end;
-    }
-  }
-  return out;
-}
 
 /** The spans between supports that hold deflection, and the cantilevers beyond the outermost ones. */
 export function spansOf(length: number, supports: readonly Support[]): BeamSpan[] {
@@ -72,7 +31,7 @@ export function spansOf(length: number, supports: readonly Support[]): BeamSpan[
  */
 export function conditioningWarnings(model: BeamModel, supports: readonly Support[], pivotRatio: number): BeamWarning[] {
   const out: BeamWarning[] = [];
-  const last = model.nodes - 1;
+  const last = model.joints - 1;
   for (let s = 0; s < supports.length; s++) {
     const sup = supports[s] as Support;
     if (sup.kind !== "spring") continue;
@@ -81,7 +40,7 @@ export function conditioningWarnings(model: BeamModel, supports: readonly Suppor
     let kr = 0;
     for (const e of [node - 1, node]) {
       if (e < 0 || e >= last) continue;
-      const h = (model.x[e + 1] as number) - (model.x[e] as number);
+      const h = (model.x[model.joint[e + 1] as number] as number) - (model.x[model.joint[e] as number] as number);
       const ei = model.ei[e] as number;
       kv += (12 * ei) / (h * h * h);
       kr += (4 * ei) / h;
@@ -121,14 +80,21 @@ export function conditioningWarnings(model: BeamModel, supports: readonly Suppor
  * value means float64 could not resolve the member (very soft parts next to very stiff short
  * elements) and the results carry that relative error.
  */
-export function balanceWarnings(model: BeamModel, result: StiffnessResult, supports: readonly Support[]): BeamWarning[] {
-  const n = model.nodes;
+export function balanceWarnings(model: BeamModel, result: StiffnessResult, supports: readonly Support[], scratch: Scratch): BeamWarning[] {
+  const n = model.joints;
   const q = result.endForces;
   const d = result.displacements;
-  const length = (model.x[n - 1] as number) - (model.x[0] as number);
-  const rigid = new Uint8Array(2 * n);
-  const springV = new Float64Array(n);
-  const springR = new Float64Array(n);
+  const x = model.x;
+  const length = (x[model.nodes - 1] as number) - (x[0] as number);
+  // the size of the loading: every load, wherever it acts
+  let scale = 0;
+  for (let i = 0; i < model.nodes; i++) {
+    scale += Math.abs(model.force[i] as number) + Math.abs(model.couple[i] as number) / length;
+    if (i + 1 < model.nodes) scale += 0.5 * (Math.abs(model.wLeft[i] as number) + Math.abs(model.wRight[i] as number)) * ((x[i + 1] as number) - (x[i] as number));
+  }
+  const rigid = scratch.rigid;
+  const springV = scratch.springV;
+  const springR = scratch.springR;
   for (let s = 0; s < supports.length; s++) {
     const sup = supports[s] as Support;
     const node = model.supportNode[s] as number;
@@ -152,13 +118,12 @@ export function balanceWarnings(model: BeamModel, result: StiffnessResult, suppo
         return sup.kind satisfies never;
     }
   }
-  let scale = 0;
   let worstForce = 0;
   let worstMoment = 0;
   for (let i = 0; i < n; i++) {
-    let f = model.force[i] as number;
-    let m = -(model.couple[i] as number);
-    scale += Math.abs(f) + Math.abs(m) / length;
+    const at = model.joint[i] as number;
+    let f = model.force[at] as number;
+    let m = -(model.couple[at] as number);
     if (i > 0) {
       f += q[4 * (i - 1) + 2] as number;
       m += q[4 * (i - 1) + 3] as number;
@@ -166,8 +131,6 @@ export function balanceWarnings(model: BeamModel, result: StiffnessResult, suppo
     if (i < n - 1) {
       f += q[4 * i] as number;
       m += q[4 * i + 1] as number;
-      const h = (model.x[i + 1] as number) - (model.x[i] as number);
-      scale += 0.5 * (Math.abs(model.wLeft[i] as number) + Math.abs(model.wRight[i] as number)) * h;
     }
     if (rigid[2 * i] === 1) scale += Math.abs(f);
     else worstForce = Math.max(worstForce, Math.abs(f - (springV[i] as number)));

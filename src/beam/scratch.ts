@@ -5,17 +5,24 @@
  * Arrays are at least as long as asked for, often longer: index them, never read `.length`.
  */
 export interface Scratch {
-  /** Candidate node positions, before sorting and merging. */
+  /** Candidate node positions, before sorting and merging, and room to sort them. */
   raw: Float64Array;
-  /** Per element: E I, load intensity at each end, hinge release at the right end. */
-  ei: Float64Array;
+  spare: Float64Array;
+  /** Per piece: load intensity at each end. */
   wLeft: Float64Array;
   wRight: Float64Array;
+  /** Per element: E I, hinge release at the right end, the four fixed-end actions. */
+  ei: Float64Array;
   released: Uint8Array;
-  /** Per node: applied force and couple. */
+  fixedEnd: Float64Array;
+  /** Per breakpoint: applied force and couple; structural mark (1 node, 2 hinge); structural index. */
   force: Float64Array;
   couple: Float64Array;
-  /** Per support: its node. */
+  mark: Uint8Array;
+  jointOf: Int32Array;
+  /** Per structural node: its breakpoint. */
+  joint: Int32Array;
+  /** Per support: its structural node. */
   supportNode: Int32Array;
   /** Stiffness system: band, right-hand side (then displacements), prescribed flags and values. */
   band: Float64Array;
@@ -24,13 +31,18 @@ export interface Scratch {
   value: Float64Array;
   /** Per element: the four end forces. */
   endForces: Float64Array;
+  /** Per structural node, for the balance check: rigid restraint flags (two per node), spring force and moment. */
+  rigid: Uint8Array;
+  springV: Float64Array;
+  springR: Float64Array;
 }
 
 function fresh(): Scratch {
   // empty to start with: each array is replaced by a long enough one on first use
   const f = new Float64Array(0);
   const u = new Uint8Array(0);
-  return { raw: f, ei: f, wLeft: f, wRight: f, released: u, force: f, couple: f, supportNode: new Int32Array(0), band: f, rhs: f, prescribed: u, value: f, endForces: f };
+  const i = new Int32Array(0);
+  return { raw: f, spare: f, wLeft: f, wRight: f, ei: f, released: u, fixedEnd: f, force: f, couple: f, mark: u, jointOf: i, joint: i, supportNode: i, band: f, rhs: f, prescribed: u, value: f, endForces: f, rigid: u, springV: f, springR: f };
 }
 
 const shared = fresh();
@@ -55,12 +67,16 @@ function capacity(current: number, n: number): number {
 
 /** Makes room for `count` candidate node positions. */
 export function ensureRaw(s: Scratch, count: number): void {
-  if (s.raw.length < count) s.raw = new Float64Array(capacity(s.raw.length, count));
+  if (s.raw.length < count) {
+    const c = capacity(s.raw.length, count);
+    s.raw = new Float64Array(c);
+    s.spare = new Float64Array(c);
+  }
 }
 
 /**
- * Makes room for a member of `nodes` nodes and `supports` supports, and zeroes the per-node and
- * per-element accumulators (the stiffness system is zeroed by its own solve).
+ * Makes room for a member of `nodes` nodes and `supports` supports, and zeroes the per-breakpoint and
+ * per-piece accumulators (the stiffness system is zeroed by its own solve).
  */
 export function ensureNodes(s: Scratch, nodes: number, supports: number): void {
   const elements = nodes - 1;
@@ -70,16 +86,22 @@ export function ensureNodes(s: Scratch, nodes: number, supports: number): void {
     s.wLeft = new Float64Array(c);
     s.wRight = new Float64Array(c);
     s.released = new Uint8Array(c);
+    s.fixedEnd = new Float64Array(4 * c);
     s.endForces = new Float64Array(4 * c);
   } else {
     s.wLeft.fill(0, 0, elements);
     s.wRight.fill(0, 0, elements);
-    s.released.fill(0, 0, elements);
   }
   if (s.force.length < nodes) {
     const c = capacity(s.force.length, nodes);
     s.force = new Float64Array(c);
     s.couple = new Float64Array(c);
+    s.mark = new Uint8Array(c);
+    s.jointOf = new Int32Array(c);
+    s.joint = new Int32Array(c);
+    s.rigid = new Uint8Array(2 * c);
+    s.springV = new Float64Array(c);
+    s.springR = new Float64Array(c);
     s.rhs = new Float64Array(2 * c);
     s.prescribed = new Uint8Array(2 * c);
     s.value = new Float64Array(2 * c);
@@ -87,6 +109,10 @@ export function ensureNodes(s: Scratch, nodes: number, supports: number): void {
   } else {
     s.force.fill(0, 0, nodes);
     s.couple.fill(0, 0, nodes);
+    s.mark.fill(0, 0, nodes);
+    s.rigid.fill(0, 0, 2 * nodes);
+    s.springV.fill(0, 0, nodes);
+    s.springR.fill(0, 0, nodes);
   }
   if (s.supportNode.length < supports) s.supportNode = new Int32Array(capacity(s.supportNode.length, supports));
 }

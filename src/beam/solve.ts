@@ -1,13 +1,13 @@
 import { attempt, type Result } from "../errors/index.js";
 import { loadResultant } from "../loads/index.js";
-import { extremesOf, type Extremes, type PiecewisePolynomial } from "../math/index.js";
 import { buildModel } from "./model.js";
 import { recoverDiagrams, recoverReactions, type Diagrams } from "./recover.js";
 import { acquireScratch, releaseScratch } from "./scratch.js";
-import { balanceWarnings, conditioningWarnings, contraflexurePoints, spansOf } from "./results.js";
+import { peaksOf } from "./peaks.js";
+import { balanceWarnings, conditioningWarnings, spansOf } from "./results.js";
 import { checkStability } from "./stability.js";
 import { solveStiffness } from "./stiffness.js";
-import type { BeamInput, BeamPeaks, BeamResidual, BeamSolution, BeamSpan, BeamWarning, Reaction, SolveOptions } from "./types.js";
+import type { BeamInput, BeamResidual, BeamSolution, BeamSpan, BeamWarning, Reaction, SolveOptions } from "./types.js";
 import { validateBeam } from "./validate.js";
 
 /**
@@ -59,7 +59,7 @@ export function solveBeam(beam: BeamInput, options?: SolveOptions): BeamSolution
       force += r.force;
       moment += r.force * r.at + r.moment;
     }
-    const warnings = [...conditioningWarnings(model, beam.supports, result.pivotRatio), ...balanceWarnings(model, result, beam.supports)];
+    const warnings = [...conditioningWarnings(model, beam.supports, result.pivotRatio), ...balanceWarnings(model, result, beam.supports, scratch)];
     return solution(beam.length, Object.freeze(reactions), diagrams, Object.freeze({ force, moment }), Object.freeze(warnings), Object.freeze(spansOf(beam.length, beam.supports)));
   } finally {
     releaseScratch(scratch);
@@ -78,14 +78,7 @@ function solution(
   warnings: readonly BeamWarning[],
   spans: readonly BeamSpan[],
 ): BeamSolution {
-  const moment = frozenExtremes(diagrams.moment);
-  const peaks: BeamPeaks = Object.freeze({
-    shear: frozenExtremes(diagrams.shear),
-    moment,
-    slope: frozenExtremes(diagrams.slope),
-    deflection: frozenExtremes(diagrams.deflection),
-  });
-  const scale = Math.max(Math.abs(moment.max.value), Math.abs(moment.min.value));
+  const { peaks, contraflexure } = peaksOf(diagrams);
   return Object.freeze({
     length,
     reactions,
@@ -94,15 +87,11 @@ function solution(
     slope: diagrams.slope,
     deflection: diagrams.deflection,
     peaks,
-    contraflexure: Object.freeze(contraflexurePoints(diagrams.moment, scale)),
+    contraflexure,
     residual,
     warnings,
     spans,
   });
-}
-
-function frozenExtremes(pp: PiecewisePolynomial): Extremes {
-  return extremesOf(pp);
 }
 
 /**

@@ -32,7 +32,7 @@ export function checkStability(length: number, supports: readonly Support[], hin
     throw new FlexuraError([
       issue("no-horizontal-restraint", ["supports"], "No support holds the member along its axis (rollers and springs let it slide): make one support a pin, fixed or guided.", {}),
     ]);
-  const order = hinges.map((at, index) => ({ at, index })).sort((a, b) => a.at - b.at);
+  const order = hinges.length === 0 ? [] : hinges.map((at, index) => ({ at, index })).sort((a, b) => a.at - b.at);
   const sorted = inOrder(supports) ? supports : [...supports].sort((a, b) => a.at - b.at);
   const close = 1e-10 * length;
   let allowed: Motion[] = [
@@ -98,7 +98,7 @@ function dot(u: Motion, f: Motion): number {
 }
 
 function norm(u: Motion): number {
-  return Math.hypot(u[0], u[1]);
+  return Math.sqrt(u[0] * u[0] + u[1] * u[1]);
 }
 
 /** The motions in `allowed` that satisfy f . u = 0. */

@@ -1,6 +1,7 @@
 import { FlexuraError, issue } from "../errors/index.js";
 import { factorBandedSymmetric, solveBandedSymmetric } from "../math/index.js";
 import type { Support } from "../supports/index.js";
+import { fixedEndActions } from "./fixed-end.js";
 import type { BeamModel } from "./model.js";
 import type { Scratch } from "./scratch.js";
 
@@ -10,7 +11,7 @@ const S = W + 1;
 
 /** Nodal displacements and element end forces. */
 export interface StiffnessResult {
-  /** Displacements: deflection (up) and rotation (ccw) of each node, interleaved (working storage: index it). */
+  /** Displacements: deflection (up) and rotation (ccw) of each structural node, interleaved (working storage: index it). */
   readonly displacements: Float64Array;
   /** Forces on each element from its nodes: [Q left (up), M left (ccw), Q right, M right] (working storage: index it). */
   readonly endForces: Float64Array;
@@ -22,9 +23,9 @@ export interface StiffnessResult {
 const k = new Float64Array(16);
 const f = new Float64Array(4);
 
-/** Fills `k` and `f` for element e (fixed-end forces of its linear load; condensed when released). */
-function elementMatrices(model: BeamModel, e: number): void {
-  const h = (model.x[e + 1] as number) - (model.x[e] as number);
+/** Fills `k` and `f` for element e (its fixed-end actions from `fixed`; condensed when released). */
+function elementMatrices(model: BeamModel, fixed: Float64Array, e: number): void {
+  const h = (model.x[model.joint[e + 1] as number] as number) - (model.x[model.joint[e] as number] as number);
   const a = (model.ei[e] as number) / (h * h * h);
   const k00 = 12 * a;
   const k01 = 6 * a * h;
@@ -35,17 +36,11 @@ function elementMatrices(model: BeamModel, e: number): void {
   k[10] = k00; k[11] = -k01;
   k[15] = k11;
   k[4] = k01; k[8] = -k00; k[9] = -k01; k[12] = k01; k[13] = k13; k[14] = -k01;
-  // clamp forces for w(t) = w1 + (w2 - w1) t / h, downward: uniform part plus triangular part
-  const w1 = model.wLeft[e] as number;
-  const dw = (model.wRight[e] as number) - w1;
-  f[0] = (w1 * h) / 2 + (3 * dw * h) / 20;
-  f[1] = (w1 * h * h) / 12 + (dw * h * h) / 30;
-  f[2] = (w1 * h) / 2 + (7 * dw * h) / 20;
-  f[3] = -((w1 * h * h) / 12 + (dw * h * h) / 20);
+  for (let i = 0; i < 4; i++) f[i] = fixed[4 * e + i] as number;
   if (model.released[e] === 1) {
     // static condensation of the right-end rotation: its end moment is zero
     const k33 = k[15];
-    const f3 = f[3];
+    const f3 = f[3] as number;
     for (let i = 0; i < 3; i++) {
       const ki3 = k[i * 4 + 3] as number;
       for (let j = 0; j < 3; j++) k[i * 4 + j] = (k[i * 4 + j] as number) - (ki3 * (k[j * 4 + 3] as number)) / k33;
@@ -64,15 +59,17 @@ function elementMatrices(model: BeamModel, e: number): void {
  *   but float64 cannot hold, such as one resting only on vanishingly soft springs).
  */
 export function solveStiffness(model: BeamModel, supports: readonly Support[], scratch: Scratch): StiffnessResult {
-  const n = model.nodes;
+  const n = model.joints;
   const N = 2 * n;
   const elements = n - 1;
+  const fixed = scratch.fixedEnd;
+  fixedEndActions(model, fixed);
   const band = scratch.band;
   const rhs = scratch.rhs;
   band.fill(0, 0, N * S);
   rhs.fill(0, 0, N);
   for (let e = 0; e < elements; e++) {
-    elementMatrices(model, e);
+    elementMatrices(model, fixed, e);
     const base = 2 * e;
     for (let i = 0; i < 4; i++) {
       const row = (base + i) * S;
@@ -81,8 +78,9 @@ export function solveStiffness(model: BeamModel, supports: readonly Support[], s
     }
   }
   for (let i = 0; i < n; i++) {
-    rhs[2 * i] = (rhs[2 * i] as number) - (model.force[i] as number);
-    rhs[2 * i + 1] = (rhs[2 * i + 1] as number) + (model.couple[i] as number);
+    const at = model.joint[i] as number;
+    rhs[2 * i] = (rhs[2 * i] as number) - (model.force[at] as number);
+    rhs[2 * i + 1] = (rhs[2 * i + 1] as number) + (model.couple[at] as number);
   }
   // supports: springs on the diagonal, rigid restraints as prescribed values
   const prescribed = scratch.prescribed;
@@ -145,7 +143,7 @@ export function solveStiffness(model: BeamModel, supports: readonly Support[], s
   const report = factorBandedSymmetric(band, N, W, 1e-14);
   if (report.singularAt >= 0) {
     const node = report.singularAt >> 1;
-    const at = model.x[node] as number;
+    const at = model.x[model.joint[node] as number] as number;
     throw new FlexuraError([
       issue("mechanism", ["supports"], `The member cannot be held near x = ${at}: its supports are too soft for float64 to resolve. Stiffen the springs or add a rigid support.`, {
         reason: "singular",
@@ -156,7 +154,7 @@ export function solveStiffness(model: BeamModel, supports: readonly Support[], s
   const d = solveBandedSymmetric(band, N, W, rhs);
   const endForces = scratch.endForces;
   for (let e = 0; e < elements; e++) {
-    elementMatrices(model, e);
+    elementMatrices(model, fixed, e);
     const base = 2 * e;
     for (let i = 0; i < 4; i++) {
       let q = f[i] as number;

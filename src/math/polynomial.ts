@@ -36,8 +36,8 @@ export const scratchRoots = new Float64Array((MAX_DEGREE + 2) * RUN);
  *
  * Degree 1 and 2 use closed forms (the quadratic in its cancellation-free form); higher degrees
  * isolate each root between consecutive roots of the derivative (found recursively), where the
- * polynomial is monotone, and then converge by a bracketed false-position method with the
- * Illinois modification and a bisection safeguard, which always converges. A root where the
+ * polynomial is monotone, and then converge by Newton's method kept inside the bracket with a
+ * bisection safeguard, which always converges. A root where the
  * polynomial only touches zero (even multiplicity) is reported when the value at the
  * derivative's root is zero to rounding. A polynomial that is identically zero has no isolated
  * roots and returns none.
@@ -126,7 +126,7 @@ function rootsRecursive(c: ArrayLike<number>, off: number, d: number, lo: number
     if (fb === 0) {
       found = pushRoot(base, found, b, lo, hi);
     } else if (fa !== 0 && (fa < 0) !== (fb < 0)) {
-      found = pushRoot(base, found, bracketedRoot(c, off, d, a, b, fa, fb), lo, hi);
+      found = pushRoot(base, found, monotoneRoot(c, off, d, derivativeScratch, dOff, a, b, fa, fb), lo, hi);
     } else if (i < n - 1 && Math.abs(fb) <= touch) {
       // a critical point where the polynomial touches zero without crossing
       found = pushRoot(base, found, b, lo, hi);
@@ -158,30 +158,44 @@ function quadraticRoots(c0: number, c1: number, c2: number, lo: number, hi: numb
   return r2 !== r1 ? pushRoot(base, n, r2, lo, hi) : n;
 }
 
-/** Root of a polynomial in (a, b) where it changes sign; Illinois false position with bisection safeguard. */
-function bracketedRoot(c: ArrayLike<number>, off: number, d: number, a: number, b: number, fa: number, fb: number): number {
-  let side = 0;
-  for (let iter = 0; iter < 200; iter++) {
-    const width = b - a;
-    if (width <= 4 * Number.EPSILON * Math.max(Math.abs(a), Math.abs(b)) || width <= Number.MIN_VALUE * 4) break;
-    let x = (a * fb - b * fa) / (fb - fa);
-    // every fourth step bisects, which bounds the work even on awkward shapes
-    if (!(x > a && x < b) || (iter & 3) === 3) x = 0.5 * (a + b);
-    const fx = evaluatePolynomial(c, off, d, x);
-    if (fx === 0) return x;
-    if ((fx < 0) === (fa < 0)) {
-      a = x;
-      fa = fx;
-      if (side === -1) fb *= 0.5;
-      side = -1;
+/**
+ * Root of a polynomial in (a, b), where it changes sign and is monotone (the interval lies between
+ * consecutive roots of its derivative, whose coefficients are `dc[dOff ..]`): Newton's method from
+ * the false-position point, kept inside a shrinking bracket; a step that leaves the bracket, or
+ * does not halve it every other time, is replaced by bisection, so convergence is guaranteed and
+ * quadratic near the root (the safeguarded Newton of Press et al., Numerical Recipes, 3rd ed.,
+ * section 9.4).
+ */
+function monotoneRoot(c: ArrayLike<number>, off: number, d: number, dc: ArrayLike<number>, dOff: number, a: number, b: number, fa: number, fb: number): number {
+  // orient so that p(lo) < 0 < p(hi)
+  let lo = fa < 0 ? a : b;
+  let hi = fa < 0 ? b : a;
+  let x = (a * fb - b * fa) / (fb - fa);
+  if (!(x > a && x < b)) x = 0.5 * (a + b);
+  let older = b - a;
+  let step = older;
+  let f = evaluatePolynomial(c, off, d, x);
+  let df = evaluatePolynomial(dc, dOff, d - 1, x);
+  for (let iter = 0; iter < 100; iter++) {
+    if (f === 0) return x;
+    if (f < 0) lo = x;
+    else hi = x;
+    const tol = 2 * Number.EPSILON * Math.abs(x) + Number.MIN_VALUE;
+    // bisect when Newton would leave the bracket or is not shrinking fast enough
+    if (((x - hi) * df - f) * ((x - lo) * df - f) > 0 || Math.abs(2 * f) > Math.abs(older * df)) {
+      older = step;
+      step = 0.5 * (hi - lo);
+      x = lo + step;
     } else {
-      b = x;
-      fb = fx;
-      if (side === 1) fa *= 0.5;
-      side = 1;
+      older = step;
+      step = f / df;
+      x -= step;
     }
+    if (Math.abs(step) <= tol || Math.abs(hi - lo) <= 2 * tol) return x;
+    f = evaluatePolynomial(c, off, d, x);
+    df = evaluatePolynomial(dc, dOff, d - 1, x);
   }
-  return Math.abs(fa) < Math.abs(fb) ? a : b;
+  return x;
 }
 
 /**

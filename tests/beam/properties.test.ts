@@ -19,7 +19,7 @@ function size(pp: PiecewisePolynomial, xs: readonly number[]): number {
   return m;
 }
 
-function expectClose(actual: number, expected: number, scale: number, rel = 1e-7): void {
+function expectClose(actual: number, expected: number, scale: number, rel = 1e-9): void {
   expect(Math.abs(actual - expected)).toBeLessThanOrEqual(rel * scale + 1e-300);
 }
 
@@ -86,14 +86,14 @@ describe("solveBeam laws on random stable members", () => {
     });
     for (const h of beam.hinges ?? []) {
       const coupleThere = (beam.loads ?? []).some((l) => l.kind === "couple" && Math.abs(l.at - h) < 1e-12);
-      expectClose(evaluatePiecewise(s.moment, h, "left"), 0, mScale, 1e-7);
-      if (!coupleThere) expectClose(evaluatePiecewise(s.moment, h, "right"), 0, mScale, 1e-7);
+      expectClose(evaluatePiecewise(s.moment, h, "left"), 0, mScale, 1e-9);
+      if (!coupleThere) expectClose(evaluatePiecewise(s.moment, h, "right"), 0, mScale, 1e-9);
       expectClose(evaluatePiecewise(s.deflection, h, "left"), evaluatePiecewise(s.deflection, h, "right"), yScale);
     }
     for (const end of [0, beam.length]) {
       const supported = beam.supports.some((p) => Math.abs(p.at - end) < 1e-12 && p.kind !== "pin" && p.kind !== "roller");
       const loaded = (beam.loads ?? []).some((l) => l.kind === "couple" && Math.abs(l.at - end) < 1e-12);
-      if (!supported && !loaded) expectClose(evaluatePiecewise(s.moment, end), 0, mScale, 1e-7);
+      if (!supported && !loaded) expectClose(evaluatePiecewise(s.moment, end), 0, mScale, 1e-9);
     }
   });
 
@@ -128,7 +128,7 @@ describe("solveBeam laws on random stable members", () => {
       const d12 = evaluatePiecewise(s1.deflection, x2);
       const d21 = evaluatePiecewise(s2.deflection, x1);
       const scale = Math.max(size(s1.deflection, [x1, x2]), size(s2.deflection, [x1, x2]), 1e-300);
-      expectClose(d12, d21, scale, 1e-7);
+      expectClose(d12, d21, scale, 1e-9);
     },
   );
 

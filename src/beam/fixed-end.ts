@@ -1,0 +1,50 @@
+import type { BeamModel } from "./model.js";
+
+/**
+ * The fixed-end actions of every element: the forces its two clamped ends take from all the
+ * loads inside it (distributed loads on its pieces, point forces and couples at its interior
+ * breakpoints), exactly, whatever their number and placement. Written to `out` as
+ * [Q left (up), M left (ccw), Q right (up), M right (ccw)] per element.
+ *
+ * Method: run the element as a cantilever from its clamped left end with no end forces, piece
+ * by piece (V, M, E I slope and E I deflection are polynomials, integrated exactly), then choose
+ * the left-end force and moment that bring the right end's deflection and slope back to zero
+ * (compatibility, as in the flexibility method: Weaver & Gere, Matrix Analysis of Framed
+ * Structures, 3rd ed., ch. 1; the results for single loads agree with the fixed-end action
+ * tables of its appendix B).
+ */
+export function fixedEndActions(model: BeamModel, out: Float64Array): void {
+  const x = model.x;
+  const joint = model.joint;
+  for (let e = 0; e + 1 < model.joints; e++) {
+    const first = joint[e] as number;
+    const last = joint[e + 1] as number;
+    // state at the running point: shear, moment, E I times slope, E I times deflection
+    let v = 0;
+    let m = 0;
+    let t = 0;
+    let d = 0;
+    for (let i = first; i < last; i++) {
+      const h = (x[i + 1] as number) - (x[i] as number);
+      const a0 = model.wLeft[i] as number;
+      const dw = (model.wRight[i] as number) - a0; // a1 * h, for w = a0 + a1 s
+      d += h * (t + h * (m / 2 + h * (v / 6 - h * (a0 / 24 + dw / 120))));
+      t += h * (m + h * (v / 2 - h * (a0 / 6 + dw / 24)));
+      m += h * (v - h * (a0 / 2 + dw / 6));
+      v -= h * (a0 + dw / 2);
+      if (i + 1 < last) {
+        v -= model.force[i + 1] as number;
+        m -= model.couple[i + 1] as number;
+      }
+    }
+    const h = (x[last] as number) - (x[first] as number);
+    // Q h^3/6 - M h^2/2 = -d and Q h^2/2 - M h = -t (E I cancels)
+    const q = (12 * d) / (h * h * h) - (6 * t) / (h * h);
+    const c = (6 * d) / (h * h) - (2 * t) / h;
+    const o = 4 * e;
+    out[o] = q;
+    out[o + 1] = c;
+    out[o + 2] = -(q + v);
+    out[o + 3] = -c + q * h + m;
+  }
+}

@@ -1,0 +1,186 @@
+import type { Extremes, PiecewisePolynomial } from "../math/index.js";
+import { clearOfZero, evaluatePolynomial, rootsToScratch, scratchRoots } from "../math/polynomial.js";
+import type { Diagrams } from "./recover.js";
+import type { BeamPeaks } from "./types.js";
+
+/**
+ * Running largest and smallest values with their locations, four numbers per diagram:
+ * [max value, its x, min value, its x]; ties keep the leftmost.
+ */
+const running = new Float64Array(16);
+
+function see(k: number, value: number, x: number): void {
+  const v = value + 0; // reports 0, never -0
+  if (v > (running[k] as number)) {
+    running[k] = v;
+    running[k + 1] = x;
+  }
+  if (v < (running[k + 2] as number)) {
+    running[k + 2] = v;
+    running[k + 3] = x;
+  }
+}
+
+function extremes(k: number): Extremes {
+  return { max: { value: running[k] as number, at: running[k + 1] as number }, min: { value: running[k + 2] as number, at: running[k + 3] as number } };
+}
+
+const roots = new Float64Array(8);
+const derivative = new Float64Array(2);
+
+/**
+ * Copies the roots of piece `i` of `pp` in [0, h] (skipping a piece clear of zero) from the
+ * shared root scratch; returns their number.
+ */
+function pieceRoots(pp: PiecewisePolynomial, i: number, h: number): number {
+  const d = pp.degree;
+  const o = i * (d + 1);
+  if (clearOfZero(pp.coefficients, o, d, h)) return 0;
+  const count = rootsToScratch(pp.coefficients, o, d, 0, h);
+  for (let r = 0; r < count; r++) roots[r] = scratchRoots[r] as number;
+  return count;
+}
+
+/** Feeds a piece's values at its ends and at the interior points `roots[0 .. count - 1]` to diagram `k`'s running extremes. */
+function scan(k: number, pp: PiecewisePolynomial, i: number, x0: number, x1: number, h: number, count: number): void {
+  const c = pp.coefficients;
+  const d = pp.degree;
+  const o = i * (d + 1);
+  see(k, c[o] as number, x0);
+  for (let r = 0; r < count; r++) {
+    const t = roots[r] as number;
+    see(k, evaluatePolynomial(c, o, d, t), Math.min(t + x0, x1));
+  }
+  see(k, evaluatePolynomial(c, o, d, h), x1);
+}
+
+const bernstein = new Float64Array(6);
+
+/**
+ * True when the quintic `c[o] + ... + c[o+5] t^5` stays within diagram `k`'s running extremes
+ * over 0 <= t <= h: its Bernstein coefficients on the piece bound it (the convex hull property;
+ * Farouki & Rajan, "On the numerical condition of polynomials in Bernstein form", Computer Aided
+ * Geometric Design 4 (1987)), so when they all lie within, no interior point can beat them.
+ */
+function withinRunning(k: number, c: Float64Array, o: number, h: number): boolean {
+  // scaled power coefficients a_j = c_j h^j / C(5, j), then b_i = sum_j C(i, j) a_j
+  let p = 1;
+  for (let j = 0; j <= 5; j++) {
+    bernstein[j] = ((c[o + j] as number) * p) / (BINOMIAL5[j] as number);
+    p *= h;
+  }
+  // de Casteljau-like accumulation: repeated forward sums turn a_j into b_i
+  for (let r = 1; r <= 5; r++) for (let j = 5; j >= r; j--) bernstein[j] = (bernstein[j] as number) + (bernstein[j - 1] as number);
+  const max = running[k] as number;
+  const min = running[k + 2] as number;
+  for (let j = 0; j <= 5; j++) {
+    const v = bernstein[j] as number;
+    if (!(v <= max && v >= min)) return false;
+  }
+  return true;
+}
+
+const BINOMIAL5 = [1, 5, 10, 10, 5, 1];
+
+/** The peaks of the four diagrams and the points of contraflexure, in one pass over the pieces. */
+export interface PeaksAndContraflexure {
+  readonly peaks: BeamPeaks;
+  readonly contraflexure: readonly number[];
+}
+
+/**
+ * The largest and smallest shear, moment, slope and deflection with their locations, and the
+ * points of contraflexure, found exactly in one pass: each diagram's interior extremes lie at the
+ * real roots of its derivative, and the derivative of each is the diagram before it (deflection'
+ * = slope, slope' = M / E I, M' = V, V' = -w), so each piece's roots are found once and serve
+ * twice: the roots of the moment give both the slope's extremes and the points of contraflexure.
+ *
+ * A point of contraflexure: on each piece the moment's roots split it into stretches of one sign
+ * (judged at each stretch's midpoint); a sign change between neighbouring stretches is a point
+ * of contraflexure. Stretches whose moment is zero to rounding (1e-10 of the largest moment) are
+ * skipped, so an unloaded overhang, or a hinge where the moment only touches zero, gives none. A
+ * jump across zero at an applied couple counts.
+ */
+export function peaksOf(diagrams: Diagrams): PeaksAndContraflexure {
+  const { shear, moment, slope, deflection } = diagrams;
+  const b = moment.breaks;
+  const pieces = b.length - 1;
+  for (let k = 0; k < 16; k += 4) {
+    running[k] = -Infinity;
+    running[k + 2] = Infinity;
+  }
+  // moment roots of every piece, kept for the contraflexure pass once the largest moment is known
+  const momentRoots: number[] = [];
+  const momentRootCount = new Int32Array(pieces);
+  for (let i = 0; i < pieces; i++) {
+    const x0 = b[i] as number;
+    const x1 = b[i + 1] as number;
+    const h = x1 - x0;
+    // shear: its derivative -w is linear
+    const so = 3 * i;
+    derivative[0] = shear.coefficients[so + 1] as number;
+    derivative[1] = 2 * (shear.coefficients[so + 2] as number);
+    let count = rootsToScratch(derivative, 0, 1, 0, h);
+    if (count > 0) roots[0] = scratchRoots[0] as number;
+    scan(0, shear, i, x0, x1, h, count);
+    // moment: at the roots of the shear
+    count = pieceRoots(shear, i, h);
+    scan(4, moment, i, x0, x1, h, count);
+    // slope: at the roots of the moment (kept for contraflexure)
+    count = pieceRoots(moment, i, h);
+    momentRootCount[i] = count;
+    for (let k = 0; k < count; k++) momentRoots.push(roots[k] as number);
+    scan(8, slope, i, x0, x1, h, count);
+    // deflection: its ends now; its interior (the roots of the slope, the costliest) in a second pass
+    const yo = 6 * i;
+    see(12, deflection.coefficients[yo] as number, x0);
+    see(12, evaluatePolynomial(deflection.coefficients, yo, 5, h), x1);
+  }
+  // a piece whose deflection provably stays within the extremes found so far cannot hold a new one
+  for (let i = 0; i < pieces; i++) {
+    const x0 = b[i] as number;
+    const x1 = b[i + 1] as number;
+    const h = x1 - x0;
+    if (withinRunning(12, deflection.coefficients, 6 * i, h)) continue;
+    const count = pieceRoots(slope, i, h);
+    scan(12, deflection, i, x0, x1, h, count);
+  }
+  const scale = Math.max(Math.abs(running[4] as number), Math.abs(running[6] as number));
+  return {
+    peaks: Object.freeze({ shear: extremes(0), moment: extremes(4), slope: extremes(8), deflection: extremes(12) }),
+    contraflexure: Object.freeze(contraflexure(moment, momentRoots, momentRootCount, scale)),
+  };
+}
+
+function contraflexure(moment: PiecewisePolynomial, momentRoots: readonly number[], counts: Int32Array, scale: number): number[] {
+  const b = moment.breaks;
+  const c = moment.coefficients;
+  const zero = 1e-10 * scale;
+  const gap = 1e-8 * ((b[b.length - 1] as number) - (b[0] as number));
+  const out: number[] = [];
+  let lastSign = 0;
+  let lastEnd = 0;
+  let k = 0;
+  for (let i = 0; i + 1 < b.length; i++) {
+    const x0 = b[i] as number;
+    const h = (b[i + 1] as number) - x0;
+    const count = counts[i] as number;
+    let start = 0;
+    for (let j = 0; j <= count; j++) {
+      const end = j < count ? (momentRoots[k + j] as number) : h;
+      if (end > start) {
+        const value = evaluatePolynomial(c, i * 4, 3, 0.5 * (start + end));
+        const sign = value > zero ? 1 : value < -zero ? -1 : 0;
+        if (sign !== 0) {
+          const here = x0 + start;
+          if (lastSign !== 0 && sign !== lastSign && here - lastEnd <= gap) out.push(0.5 * (here + lastEnd));
+          lastSign = sign;
+          lastEnd = x0 + end;
+        }
+      }
+      start = end;
+    }
+    k += count;
+  }
+  return out;
+}
