@@ -5,11 +5,12 @@ import { cornerStresses, type CornerStresses } from "./corners.js";
 import { checkPointsPerBand, findPeak, pointAt, profilePoints, type CutSource } from "./shear-peak.js";
 import type { ShearStressPoint, ShearStressProfile } from "./shear-profile.js";
 import { candidatePoints, sectionLevels } from "./section-points.js";
+import { sectionWidthTerms } from "./section-width-terms.js";
 import { checkFibreInside } from "./validate.js";
 
 /** Options of the functions that take a section from the section module. */
 export interface SectionStressOptions extends SectionPropertiesOptions {
-  /** Points per band between consecutive level heights in a shear profile (>= 1); 16 when omitted. */
+  /** Points per band between consecutive level heights in a shear profile (>= 1), for plotting (the peak does not depend on them); 16 when omitted. */
   readonly pointsPerBand?: number;
 }
 
@@ -23,6 +24,7 @@ function cutSource(section: Section, props: SectionProperties, options: SectionS
       const r = firstMomentAbove(section, y + cy, opts);
       return side === "above" ? r.widthAbove : r.widthBelow;
     },
+    terms: () => sectionWidthTerms(section, cy, props.parts.map((p) => p.modularRatio)),
   };
 }
 
@@ -67,8 +69,9 @@ export function trySectionShearStressAt(shear: number, section: Section, y: numb
 
 /**
  * The shear stress over the depth of a section from the section module, for plotting, with its
- * peak (see `peakShearStress`: bracketed between the heights of the parts' corners and refined
- * by golden-section search).
+ * peak (see `peakShearStress`: at a height where the width changes form or at a root of the
+ * numerator of d(Q/b)/dy between them; the root is exact for straight edges and isolated by
+ * interval bounds and bisection where circles, sectors or fillets bound the band).
  *
  * @param shear - Shear force V (force).
  * @param section - The section.
@@ -87,9 +90,8 @@ export function sectionShearStressProfile(shear: number, section: Section, optio
   const perBand = checkPointsPerBand(found, options?.pointsPerBand);
   found.throwIfAny();
   const source = cutSource(section, props, options);
-  const points = profilePoints(shear, source, props.secondMomentZ, Math.max(perBand, 16));
-  const peak = findPeak(shear, source, props.secondMomentZ, points);
-  return { kind: "shear-stress-profile", points: perBand >= 16 ? points : profilePoints(shear, source, props.secondMomentZ, perBand), peak };
+  const points = profilePoints(shear, source, props.secondMomentZ, perBand);
+  return { kind: "shear-stress-profile", points, peak: findPeak(shear, source, props.secondMomentZ) };
 }
 
 /**
@@ -119,7 +121,12 @@ export function trySectionShearStressProfile(shear: number, section: Section, op
  * ```
  */
 export function sectionPeakShearStress(shear: number, section: Section, options?: SectionStressOptions): ShearStressPoint {
-  return sectionShearStressProfile(shear, section, options).peak;
+  const props = sectionProperties(section, options);
+  const found = new IssueCollector();
+  requireFinite(found, shear, ["shear"], "shear force");
+  checkPointsPerBand(found, options?.pointsPerBand);
+  found.throwIfAny();
+  return findPeak(shear, cutSource(section, props, options), props.secondMomentZ);
 }
 
 /**

@@ -1,5 +1,7 @@
 import type { IssueCollector } from "../errors/index.js";
+import { criticalHeights } from "./shear-roots.js";
 import type { ShearStressPoint } from "./shear-profile.js";
+import { bandWidth, termBreaks, type WidthTerm } from "./width-terms.js";
 
 /**
  * A section seen through horizontal cuts: what the shear-stress profile needs. Internal: the
@@ -12,41 +14,15 @@ export interface CutSource {
   firstMoment(y: number): number;
   /** Width of material at y, the one-sided limit from `side`. */
   width(y: number, side: "above" | "below"): number;
+  /** The width in closed form, term by term (y from the centroid); built on demand. */
+  terms(): readonly WidthTerm[];
 }
 
 /** The stress point at a cut of the given width. */
 export function pointAt(shear: number, source: CutSource, inertia: number, y: number, width: number): ShearStressPoint {
   const q = source.firstMoment(y) + 0;
-  const stress = width > 0 ? (shear * q) / (inertia * width) + 0 : 0;
+  const stress = width > 0 ? (shear * (q / width)) / inertia + 0 : 0;
   return { y, stress, firstMoment: q, width };
-}
-
-const GOLDEN = (Math.sqrt(5) - 1) / 2;
-
-/** Maximises f on [a, b] by golden-section search to near machine precision. */
-function maximise(f: (y: number) => number, a: number, b: number): number {
-  let lo = a;
-  let hi = b;
-  let x1 = hi - GOLDEN * (hi - lo);
-  let x2 = lo + GOLDEN * (hi - lo);
-  let f1 = f(x1);
-  let f2 = f(x2);
-  for (let i = 0; i < 200 && hi - lo > 1e-13 * (Math.abs(lo) + Math.abs(hi) + 1e-300); i++) {
-    if (f1 < f2) {
-      lo = x1;
-      x1 = x2;
-      f1 = f2;
-      x2 = lo + GOLDEN * (hi - lo);
-      f2 = f(x2);
-    } else {
-      hi = x2;
-      x2 = x1;
-      f2 = f1;
-      x1 = hi - GOLDEN * (hi - lo);
-      f1 = f(x1);
-    }
-  }
-  return f1 > f2 ? x1 : x2;
 }
 
 /** Points of the profile: band-interval ends on both sides of each level plus interior points. */
@@ -69,27 +45,51 @@ export function profilePoints(shear: number, source: CutSource, inertia: number,
   return out;
 }
 
-export function findPeak(shear: number, source: CutSource, inertia: number, samples: readonly ShearStressPoint[]): ShearStressPoint {
-  const ratio = (y: number): number => {
-    const w = source.width(y, "above");
-    return w > 0 ? source.firstMoment(y) / w : 0;
-  };
-  let best = samples[0] as ShearStressPoint;
-  let bestIndex = 0;
-  samples.forEach((s, i) => {
-    if (Math.abs(s.stress) > Math.abs(best.stress)) {
-      best = s;
-      bestIndex = i;
-    }
-  });
-  const before = samples[bestIndex - 1];
-  const after = samples[bestIndex + 1];
-  if (before === undefined || after === undefined || before.y === best.y || after.y === best.y) return best;
-  const y = maximise(ratio, before.y, after.y);
-  const refined = pointAt(shear, source, inertia, y, source.width(y, "above"));
-  return Math.abs(refined.stress) > Math.abs(best.stress) ? refined : best;
+/** Heights that split the depth into bands on which every width term keeps one form. */
+function peakBreaks(source: CutSource, terms: readonly WidthTerm[]): number[] {
+  const levels = source.levels;
+  const bottom = levels[0] ?? 0;
+  const top = levels[levels.length - 1] ?? 0;
+  const near = 1e-12 * (top - bottom);
+  const out = [...levels];
+  for (const y of termBreaks(terms)) {
+    if (y > bottom && y < top && out.every((v) => Math.abs(v - y) > near)) out.push(y);
+  }
+  return out.sort((a, b) => a - b);
 }
 
+/**
+ * The point of largest |tau| over the depth. tau = V Q / (I b) is smooth between the heights
+ * where the width changes form, so its extremes lie at those heights (on either side of a step
+ * in width) or where d(Q/b)/dy = 0 inside a band: the roots found by {@link criticalHeights}.
+ * Ties go to the lowest such point.
+ */
+export function findPeak(shear: number, source: CutSource, inertia: number): ShearStressPoint {
+  const terms = source.terms();
+  const breaks = peakBreaks(source, terms);
+  let best: ShearStressPoint | undefined;
+  const consider = (y: number, width: number): void => {
+    const p = pointAt(shear, source, inertia, y + 0, width);
+    if (best === undefined || Math.abs(p.stress) > Math.abs(best.stress)) best = p;
+  };
+  const roots: number[] = [];
+  for (let i = 0; i < breaks.length; i++) {
+    const y = breaks[i] as number;
+    if (i > 0) consider(y, source.width(y, "below"));
+    if (i < breaks.length - 1) consider(y, source.width(y, "above"));
+    const next = breaks[i + 1];
+    if (next === undefined) break;
+    const band = bandWidth(terms, y + (next - y) / 2);
+    if (!(band.p0 !== 0 || band.p1 !== 0 || band.arcs.length > 0)) continue;
+    roots.length = 0;
+    criticalHeights(band, y, next, (h) => source.firstMoment(h), roots);
+    // a root within 1e-9 of the band of its end is the end (already considered): that also keeps
+    // out the rounding-made root next to a tip of zero width, where Q and b are both noise
+    const margin = 1e-9 * (next - y);
+    for (const r of roots) if (r > y + margin && r < next - margin) consider(r, source.width(r, "above"));
+  }
+  return best as ShearStressPoint;
+}
 
 /** Validates `pointsPerBand` (16 when omitted) and returns it. */
 export function checkPointsPerBand(found: IssueCollector, value: number | undefined): number {

@@ -3,6 +3,7 @@ import { bandLevels, checkBands, firstMomentAbove, widthAt, type DepthBand } fro
 import type { ShearProperties } from "./shear.js";
 import { checkPointsPerBand, findPeak, pointAt, profilePoints, type CutSource } from "./shear-peak.js";
 import { checkFibreInside, checkSecondMoment } from "./validate.js";
+import { depthBandTerms } from "./width-terms.js";
 
 /** The shear stress at one height of a section. */
 export interface ShearStressPoint {
@@ -31,7 +32,7 @@ export interface ShearStressProfile {
 
 /** Options of {@link shearStressProfile}. */
 export interface ShearStressProfileOptions {
-  /** Points per band between consecutive width-change heights (>= 1); 16 when omitted. */
+  /** Points per band between consecutive width-change heights (>= 1), for plotting (the peak does not depend on them); 16 when omitted. */
   readonly pointsPerBand?: number;
 }
 
@@ -42,7 +43,12 @@ function area(band: DepthBand): number {
 
 /** The bands seen as a {@link CutSource}. */
 function bandSource(bands: readonly DepthBand[]): CutSource {
-  return { levels: bandLevels(bands), firstMoment: (y) => firstMomentAbove(bands, y), width: (y, side) => widthAt(bands, y, side) };
+  return {
+    levels: bandLevels(bands),
+    firstMoment: (y) => firstMomentAbove(bands, y),
+    width: (y, side) => widthAt(bands, y, side),
+    terms: () => depthBandTerms(bands),
+  };
 }
 
 function validate(shear: number, bands: readonly DepthBand[], section: ShearProperties, found: IssueCollector): void {
@@ -116,8 +122,11 @@ export function tryShearStressAt(shear: number, y: number, bands: readonly Depth
  * The largest shear stress over the depth of a section, tau = V Q / (I b), and where it acts.
  * For a rectangle it is 1.5 V / A at the neutral axis, for a solid circle 4 V / (3 A) there,
  * but for shapes that narrow toward the centroid (a diamond, say) it lies elsewhere; for an I
- * section it is in the web at the neutral axis. The search brackets the peak between the heights
- * where the width changes and refines it by golden-section search (to about 1e-13 of the depth).
+ * section it is in the web at the neutral axis. The peak comes from roots, not a search: with
+ * y from the centroid dQ/dy = -b_t y, so d(Q/b)/dy = N / b^2 with N = -b_t b y - Q b'; between
+ * the heights where the width changes form the peak is at a band end or at a root of N, a cubic
+ * on trapezoid bands (polynomial root finder) and, on circle bands, isolated by interval bounds
+ * and refined by bisection to machine precision (see docs/stress-and-checks.md).
  * Source: Roark's Formulas for Stress and Strain, 8th ed., Sec. 8.1 (from memory).
  *
  * @param shear - Shear force V (force).
@@ -132,7 +141,10 @@ export function tryShearStressAt(shear: number, y: number, bands: readonly Depth
  * ```
  */
 export function peakShearStress(shear: number, bands: readonly DepthBand[], section: ShearProperties): ShearStressPoint {
-  return shearStressProfile(shear, bands, section).peak;
+  const found = new IssueCollector();
+  validate(shear, bands, section, found);
+  found.throwIfAny();
+  return findPeak(shear, bandSource(bands), section.secondMomentZ);
 }
 
 /**
@@ -173,10 +185,8 @@ export function shearStressProfile(
   const perBand = checkPointsPerBand(found, options?.pointsPerBand);
   found.throwIfAny();
   const source = bandSource(bands);
-  const points = profilePoints(shear, source, section.secondMomentZ, Math.max(perBand, 16));
-  const peak = findPeak(shear, source, section.secondMomentZ, points);
-  const shown = perBand >= 16 ? points : profilePoints(shear, source, section.secondMomentZ, perBand);
-  return { kind: "shear-stress-profile", points: shown, peak };
+  const points = profilePoints(shear, source, section.secondMomentZ, perBand);
+  return { kind: "shear-stress-profile", points, peak: findPeak(shear, source, section.secondMomentZ) };
 }
 
 /**
