@@ -5,8 +5,14 @@ import type { Section, SectionPart } from "./types.js";
 /** A deep, frozen copy of plain data (parts, points, materials). */
 function frozenCopy<T>(value: T): T {
   if (typeof value !== "object" || value === null) return value;
-  const copy: Record<string, unknown> | unknown[] = Array.isArray(value) ? [] : {};
-  for (const [k, v] of Object.entries(value)) (copy as Record<string, unknown>)[k] = frozenCopy(v);
+  // arrays element by element (string keys on an array take V8's slow path)
+  if (Array.isArray(value)) return Object.freeze(value.map(frozenCopy)) as T;
+  // own fields in one step (faster here than a loop of keyed stores, or a spread, which makes freezing slow); then the nested objects
+  const copy: Record<string, unknown> = Object.assign({}, value as Record<string, unknown>);
+  for (const k in copy) {
+    const v = copy[k];
+    if (typeof v === "object" && v !== null) copy[k] = frozenCopy(v);
+  }
   return Object.freeze(copy) as T;
 }
 

@@ -35,7 +35,6 @@ export function containsPoint(edges: Float64Array, from: number, to: number, z: 
   let winding = 0;
   for (let e = from; e < to; e++) {
     const o = e * STRIDE;
-    if (distanceToEdge(edges, o, z, y) <= tolerance) return true;
     let ya: number;
     let yb: number;
     let zAt: number;
@@ -58,7 +57,10 @@ export function containsPoint(edges: Float64Array, from: number, to: number, z: 
     }
     if (zAt > z) winding += yb > ya ? 1 : -1;
   }
-  return winding !== 0;
+  if (winding !== 0) return true;
+  // outside: on the boundary after all?
+  for (let o = from * STRIDE, end = to * STRIDE; o < end; o += STRIDE) if (distanceToEdge(edges, o, z, y) <= tolerance) return true;
+  return false;
 }
 
 /** Points on the boundary of edges [from, to): every edge's start and middle, as flat [z, y, z, y, ...]. */

@@ -20,18 +20,6 @@ export const M_ZZ = 4;
 /** \int y z dA. */
 export const M_YZ = 5;
 
-function addLine(out: Float64Array, w: number, z0: number, y0: number, z1: number, y1: number): void {
-  const d = (y1 - y0) * w;
-  if (d === 0) return;
-  const zz = z0 * z0 + z0 * z1 + z1 * z1;
-  out[M_AREA]! += (d * (z0 + z1)) / 2;
-  out[M_Y]! += (d * (2 * z0 * y0 + z0 * y1 + z1 * y0 + 2 * z1 * y1)) / 6;
-  out[M_Z]! += (d * zz) / 6;
-  out[M_YY]! += (d * (z0 * (3 * y0 * y0 + 2 * y0 * y1 + y1 * y1) + z1 * (y0 * y0 + 2 * y0 * y1 + 3 * y1 * y1))) / 12;
-  out[M_ZZ]! += (d * (z0 + z1) * (z0 * z0 + z1 * z1)) / 12;
-  out[M_YZ]! += (d * (y0 * (3 * z0 * z0 + 2 * z0 * z1 + z1 * z1) + y1 * (z0 * z0 + 2 * z0 * z1 + 3 * z1 * z1))) / 24;
-}
-
 // Antiderivatives at one angle, written into g: G[a,b] = \int cos^(a+1) sin^b.
 // Order: g0 = G00, g1 = G10, g2 = G01, g3 = G11, g4 = G02, g5 = G20, g6 = G12, g7 = G30, g8 = G21.
 function antiderivatives(g: Float64Array, offset: number, t: number): void {
@@ -52,7 +40,7 @@ function antiderivatives(g: Float64Array, offset: number, t: number): void {
 
 const G = new Float64Array(18);
 
-function addArc(out: Float64Array, w: number, zc: number, yc: number, r: number, t0: number, t1: number): void {
+function addArc(out: Float64Array, at: number, w: number, zc: number, yc: number, r: number, t0: number, t1: number): void {
   if (t0 === t1) return;
   antiderivatives(G, 0, t0);
   antiderivatives(G, 9, t1);
@@ -71,28 +59,62 @@ function addArc(out: Float64Array, w: number, zc: number, yc: number, r: number,
   const Z = zc;
   const Y = yc;
   const zPart = Z * Z * k00 + 2 * Z * k10 + k20;
-  out[M_AREA]! += w * (Z * k00 + k10);
-  out[M_Y]! += w * (Z * Y * k00 + Z * k01 + Y * k10 + k11);
-  out[M_Z]! += (w * zPart) / 2;
-  out[M_YY]! += w * (Z * (Y * Y * k00 + 2 * Y * k01 + k02) + (Y * Y * k10 + 2 * Y * k11 + k12));
-  out[M_ZZ]! += (w * (Z * Z * Z * k00 + 3 * Z * Z * k10 + 3 * Z * k20 + k30)) / 3;
-  out[M_YZ]! += (w * (Y * zPart + Z * Z * k01 + 2 * Z * k11 + k21)) / 2;
+  out[at + M_AREA]! += w * (Z * k00 + k10);
+  out[at + M_Y]! += w * (Z * Y * k00 + Z * k01 + Y * k10 + k11);
+  out[at + M_Z]! += (w * zPart) / 2;
+  out[at + M_YY]! += w * (Z * (Y * Y * k00 + 2 * Y * k01 + k02) + (Y * Y * k10 + 2 * Y * k11 + k12));
+  out[at + M_ZZ]! += (w * (Z * Z * Z * k00 + 3 * Z * Z * k10 + 3 * Z * k20 + k30)) / 3;
+  out[at + M_YZ]! += (w * (Y * zPart + Z * Z * k01 + 2 * Z * k11 + k21)) / 2;
 }
 
-/** Adds `w` times the moments of the region bounded by edges [from, to) into `out` (six moments). */
-export function addMoments(out: Float64Array, edges: Float64Array, from: number, to: number, w: number): void {
-  // straight edges accumulate in locals (the hot loop); arcs add straight into `out`
-  let a = 0, my = 0, mz = 0, myy = 0, mzz = 0, myz = 0;
+/** Adds `w` times the moments of the region bounded by edges [from, to) into `out` (six moments, from index `at`). */
+export function addMoments(out: Float64Array, edges: Float64Array, from: number, to: number, w: number, at = 0): void {
+  addMomentsAbove(out, edges, from, to, w, -Infinity, at);
+}
+
+/**
+ * Adds `w` times the moments of the part of the region bounded by edges [from, to) that lies
+ * at or above y = cut into `out` (six moments, from index `at`).
+ */
+export function addMomentsAbove(out: Float64Array, edges: Float64Array, from: number, to: number, w: number, cut: number, at = 0): void {
   for (let o = from * STRIDE, end = to * STRIDE; o < end; o += STRIDE) {
     if (edges[o] === ARC) {
-      addArc(out, w, edges[o + 1]!, edges[o + 2]!, edges[o + 3]!, edges[o + 4]!, edges[o + 5]!);
+      const zc = edges[o + 1]!;
+      const yc = edges[o + 2]!;
+      const r = edges[o + 3]!;
+      const t0 = edges[o + 4]!;
+      const t1 = edges[o + 5]!;
+      const h = (cut - yc) / r;
+      if (h <= -1) {
+        addArc(out, at, w, zc, yc, r, t0, t1);
+        continue;
+      }
+      if (h >= 1) continue;
+      const lo = t0 < t1 ? t0 : t1;
+      const hi = t0 < t1 ? t1 : t0;
+      let p = lo;
+      let q = hi;
+      // midpoint below pi/2: y rises with the angle
+      if (lo + hi < Math.PI) p = Math.max(lo, Math.asin(h));
+      else q = Math.min(hi, Math.PI - Math.asin(h));
+      if (p >= q) continue;
+      if (t0 < t1) addArc(out, at, w, zc, yc, r, p, q);
+      else addArc(out, at, w, zc, yc, r, q, p);
       continue;
     }
-    const z0 = edges[o + 1]!;
-    const y0 = edges[o + 2]!;
-    const z1 = edges[o + 3]!;
-    const y1 = edges[o + 4]!;
-    const d = y1 - y0;
+    let z0 = edges[o + 1]!;
+    let y0 = edges[o + 2]!;
+    let z1 = edges[o + 3]!;
+    let y1 = edges[o + 4]!;
+    if (y0 < cut) {
+      if (y1 < cut) continue;
+      z0 = z0 + ((cut - y0) * (z1 - z0)) / (y1 - y0);
+      y0 = cut;
+    } else if (y1 < cut) {
+      z1 = z1 + ((cut - y1) * (z0 - z1)) / (y0 - y1);
+      y1 = cut;
+    }
+    const d = (y1 - y0) * w;
     if (d === 0) continue;
     const z00 = z0 * z0;
     const z01 = z0 * z1;
@@ -100,65 +122,12 @@ export function addMoments(out: Float64Array, edges: Float64Array, from: number,
     const y00 = y0 * y0;
     const y01 = y0 * y1;
     const y11 = y1 * y1;
-    a += d * (z0 + z1);
-    my += d * (2 * z0 * y0 + z0 * y1 + z1 * y0 + 2 * z1 * y1);
-    mz += d * (z00 + z01 + z11);
-    myy += d * (z0 * (3 * y00 + 2 * y01 + y11) + z1 * (y00 + 2 * y01 + 3 * y11));
-    mzz += d * (z0 + z1) * (z00 + z11);
-    myz += d * (y0 * (3 * z00 + 2 * z01 + z11) + y1 * (z00 + 2 * z01 + 3 * z11));
-  }
-  out[M_AREA]! += (w * a) / 2;
-  out[M_Y]! += (w * my) / 6;
-  out[M_Z]! += (w * mz) / 6;
-  out[M_YY]! += (w * myy) / 12;
-  out[M_ZZ]! += (w * mzz) / 12;
-  out[M_YZ]! += (w * myz) / 24;
-}
-
-/**
- * Adds `w` times the moments of the part of the region bounded by edges [from, to) that lies
- * at or above y = cut into `out`.
- */
-export function addMomentsAbove(out: Float64Array, edges: Float64Array, from: number, to: number, w: number, cut: number): void {
-  for (let e = from; e < to; e++) {
-    const o = e * STRIDE;
-    if (edges[o] === ARC) {
-      const zc = edges[o + 1]!;
-      const yc = edges[o + 2]!;
-      const r = edges[o + 3]!;
-      const t0 = edges[o + 4]!;
-      const t1 = edges[o + 5]!;
-      const lo = t0 < t1 ? t0 : t1;
-      const hi = t0 < t1 ? t1 : t0;
-      const h = (cut - yc) / r;
-      if (h <= -1) {
-        addArc(out, w, zc, yc, r, t0, t1);
-        continue;
-      }
-      if (h >= 1) continue;
-      const right = lo + hi < Math.PI; // midpoint below pi/2: y rises with the angle
-      let a = lo;
-      let b = hi;
-      if (right) a = Math.max(lo, Math.asin(h));
-      else b = Math.min(hi, Math.PI - Math.asin(h));
-      if (a >= b) continue;
-      if (t0 < t1) addArc(out, w, zc, yc, r, a, b);
-      else addArc(out, w, zc, yc, r, b, a);
-    } else {
-      let z0 = edges[o + 1]!;
-      let y0 = edges[o + 2]!;
-      let z1 = edges[o + 3]!;
-      let y1 = edges[o + 4]!;
-      if (y0 < cut && y1 < cut) continue;
-      if (y0 < cut) {
-        z0 = z0 + ((cut - y0) * (z1 - z0)) / (y1 - y0);
-        y0 = cut;
-      } else if (y1 < cut) {
-        z1 = z1 + ((cut - y1) * (z0 - z1)) / (y0 - y1);
-        y1 = cut;
-      }
-      addLine(out, w, z0, y0, z1, y1);
-    }
+    out[at + M_AREA]! += (d * (z0 + z1)) / 2;
+    out[at + M_Y]! += (d * (2 * z0 * y0 + z0 * y1 + z1 * y0 + 2 * z1 * y1)) / 6;
+    out[at + M_Z]! += (d * (z00 + z01 + z11)) / 6;
+    out[at + M_YY]! += (d * (z0 * (3 * y00 + 2 * y01 + y11) + z1 * (y00 + 2 * y01 + 3 * y11))) / 12;
+    out[at + M_ZZ]! += (d * (z0 + z1) * (z00 + z11)) / 12;
+    out[at + M_YZ]! += (d * (y0 * (3 * z00 + 2 * z01 + z11) + y1 * (z00 + 2 * z01 + 3 * z11))) / 24;
   }
 }
 

@@ -103,9 +103,8 @@ function plasticAboutHorizontal(edges: Float64Array, p: PreparedSection, box: Fl
   return { axis: c, modulus: myAbove - c * aAbove + (c * aBelow - myBelow) };
 }
 
-/** The edges turned a quarter turn counterclockwise: (z, y) -> (-y, z), so vertical cuts become horizontal. */
-function quarterTurn(edges: Float64Array): Float64Array {
-  const out = new Float64Array(edges.length);
+/** Writes into `out` the edges turned a quarter turn counterclockwise: (z, y) -> (-y, z), so vertical cuts become horizontal. */
+function quarterTurn(edges: Float64Array, out: Float64Array): Float64Array {
   for (let o = 0; o < edges.length; o += STRIDE) {
     out[o] = edges[o]!;
     out[o + 1] = -edges[o + 2]!;
@@ -166,8 +165,10 @@ export function plasticProperties(section: Section): PlasticProperties {
   const b = p.box;
   const aboutZ = plasticAboutHorizontal(p.edges, p, p.partBox, p.partMoments, b[2]!, b[3]!);
   // a quarter turn (z, y) -> (-y, z) makes vertical cuts horizontal: boxes and moments follow
-  const turnedBox = new Float64Array(p.count * 4);
-  const turnedMoments = new Float64Array(p.count * 6);
+  // one allocation for all three (typed arrays over 64 bytes cost microseconds each)
+  const turned = new Float64Array(p.count * 10 + p.edges.length);
+  const turnedBox = turned.subarray(0, p.count * 4);
+  const turnedMoments = turned.subarray(p.count * 4, p.count * 10);
   for (let i = 0; i < p.count; i++) {
     turnedBox[i * 4] = -p.partBox[i * 4 + 3]!;
     turnedBox[i * 4 + 1] = -p.partBox[i * 4 + 2]!;
@@ -176,7 +177,7 @@ export function plasticProperties(section: Section): PlasticProperties {
     turnedMoments[i * 6 + M_AREA] = p.partMoments[i * 6 + M_AREA]!;
     turnedMoments[i * 6 + M_Y] = p.partMoments[i * 6 + M_Z]!;
   }
-  const aboutY = plasticAboutHorizontal(quarterTurn(p.edges), p, turnedBox, turnedMoments, b[0]!, b[1]!);
+  const aboutY = plasticAboutHorizontal(quarterTurn(p.edges, turned.subarray(p.count * 10)), p, turnedBox, turnedMoments, b[0]!, b[1]!);
   const elastic = sectionProperties(section);
   const zz = aboutZ.modulus;
   const zy = aboutY.modulus;

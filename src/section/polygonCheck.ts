@@ -32,28 +32,31 @@ function segmentsMeet(
  */
 export function findSelfIntersection(zs: readonly number[], ys: readonly number[]): readonly [number, number] | undefined {
   const n = zs.length;
-  const z = (i: number): number => zs[i % n] ?? 0;
-  const y = (i: number): number => ys[i % n] ?? 0;
-  // folds: an edge that turns straight back along the one before it
+  const low: number[] = [];
+  const high: number[] = [];
+  const order: number[] = [];
   for (let i = 0; i < n; i++) {
-    const p = (i + n - 1) % n;
-    const cross = orient(z(p), y(p), z(i), y(i), z(i + 1), y(i + 1));
-    const dot = (z(i) - z(p)) * (z(i + 1) - z(i)) + (y(i) - y(p)) * (y(i + 1) - y(i));
-    if (cross === 0 && dot < 0) return [p, i];
+    const p = i === 0 ? n - 1 : i - 1;
+    const q = i + 1 === n ? 0 : i + 1;
+    // folds: an edge that turns straight back along the one before it
+    const zp = zs[p]!, yp = ys[p]!, zi = zs[i]!, yi = ys[i]!, zq = zs[q]!, yq = ys[q]!;
+    if (orient(zp, yp, zi, yi, zq, yq) === 0 && (zi - zp) * (zq - zi) + (yi - yp) * (yq - yi) < 0) return [p, i];
+    low.push(Math.min(yi, yq));
+    high.push(Math.max(yi, yq));
+    order.push(i);
   }
-  const order = Array.from({ length: n }, (_, i) => i);
-  const low = order.map((i) => Math.min(y(i), y(i + 1)));
-  const high = order.map((i) => Math.max(y(i), y(i + 1)));
-  order.sort((a, b) => (low[a] ?? 0) - (low[b] ?? 0));
+  // edges in order of their lowest y (a stable sort: ties keep index order)
+  order.sort((a, b) => low[a]! - low[b]!);
   for (let a = 0; a < n; a++) {
-    const i = order[a] ?? 0;
-    const top = high[i] ?? 0;
+    const i = order[a]!;
+    const i1 = i + 1 === n ? 0 : i + 1;
     for (let b = a + 1; b < n; b++) {
-      const j = order[b] ?? 0;
-      if ((low[j] ?? 0) > top) break;
+      const j = order[b]!;
+      if (low[j]! > high[i]!) break;
       const d = Math.abs(i - j);
       if (d === 1 || d === n - 1) continue; // neighbours share a corner
-      if (segmentsMeet(z(i), y(i), z(i + 1), y(i + 1), z(j), y(j), z(j + 1), y(j + 1))) return i < j ? [i, j] : [j, i];
+      const j1 = j + 1 === n ? 0 : j + 1;
+      if (segmentsMeet(zs[i]!, ys[i]!, zs[i1]!, ys[i1]!, zs[j]!, ys[j]!, zs[j1]!, ys[j1]!)) return i < j ? [i, j] : [j, i];
     }
   }
   return undefined;

@@ -6,6 +6,7 @@ import { ARC, STRIDE, pushPartBoundary } from "./edges.js";
 import { sinExact, cosExact } from "./angles.js";
 import { addMoments } from "./integrals.js";
 import { validatePart } from "./validatePart.js";
+import { fillWeights, type Weights } from "./weights.js";
 import type { Section, SectionPart } from "./types.js";
 
 /** A checked section in the compiled form the property functions integrate over. */
@@ -38,6 +39,8 @@ export interface PreparedSection {
   readonly netArea: number;
   /** Each part's own moments (area, \int y, \int z, \int y^2, \int z^2, \int y z; relative coordinates, unsigned), stride 6. */
   readonly partMoments: Float64Array;
+  /** The weights for the default reference modulus (see weights.ts). */
+  readonly defaultWeights: Weights;
 }
 
 const cache = new WeakMap<Section, PreparedSection>();
@@ -70,19 +73,64 @@ function edgeBox(edges: number[], from: number, to: number, box: Float64Array, a
   box[at + 3] = yMax;
 }
 
+/**
+ * Typed arrays larger than 64 bytes live outside the V8 heap and cost about a microsecond each
+ * to allocate, so every typed array of a compiled section is a view on one stretch of memory,
+ * and small sections' stretches are carved from shared blocks of BLOCK doubles (as Node carves
+ * small Buffers from a pool). Each section owns its stretch, which starts zeroed and is never
+ * handed out again; a block lives while any section cut from it does. A section needing more
+ * than a quarter of a block gets a buffer of its own.
+ */
+const BLOCK = 4096;
+let block = new ArrayBuffer(0);
+let blockUsed = BLOCK;
+let carvedAt = 0;
+
+/** A buffer with `doubles` zeroed doubles free from byte `carvedAt`. */
+function carve(doubles: number): ArrayBuffer {
+  if (doubles > BLOCK / 4) {
+    carvedAt = 0;
+    return new ArrayBuffer(doubles * 8);
+  }
+  if (blockUsed + doubles > BLOCK) {
+    block = new ArrayBuffer(BLOCK * 8);
+    blockUsed = 0;
+  }
+  carvedAt = blockUsed * 8;
+  blockUsed += doubles;
+  return block;
+}
+
 function compile(section: Section, found: IssueCollector): PreparedSection | undefined {
   const parts = section.parts;
   const count = parts.length;
   const list: number[] = [];
-  const edgeStart = new Int32Array(count + 1);
+  const starts: number[] = [];
   for (let i = 0; i < count; i++) {
-    edgeStart[i] = list.length / STRIDE;
+    starts.push(list.length / STRIDE);
     pushPartBoundary(list, parts[i] as SectionPart);
   }
-  edgeStart[count] = list.length / STRIDE;
-  const partBox = new Float64Array(count * 4);
-  const sign = new Float64Array(count);
-  const box = new Float64Array([Infinity, -Infinity, Infinity, -Infinity]);
+  starts.push(list.length / STRIDE);
+  const doubles = list.length + 4 + count * 15;
+  const buffer = carve(doubles + Math.ceil((count + 1) / 2));
+  let at = carvedAt;
+  const take = (n: number): Float64Array => {
+    const view = new Float64Array(buffer, at, n);
+    at += n * 8;
+    return view;
+  };
+  const edges = take(list.length);
+  const partBox = take(count * 4);
+  const box = take(4);
+  const sign = take(count);
+  const modulus = take(count);
+  const yieldStrength = take(count);
+  const partMoments = take(count * 6);
+  const ratios = take(count);
+  const weights = take(count);
+  const edgeStart = new Int32Array(buffer, at, count + 1);
+  edgeStart.set(starts);
+  box.set([Infinity, -Infinity, Infinity, -Infinity]);
   for (let i = 0; i < count; i++) {
     edgeBox(list, edgeStart[i]!, edgeStart[i + 1]!, partBox, i * 4);
     const hole = parts[i]?.hole === true;
@@ -99,12 +147,13 @@ function compile(section: Section, found: IssueCollector): PreparedSection | und
   }
   const refZ = (box[0]! + box[1]!) / 2;
   const refY = (box[2]! + box[3]!) / 2;
+  edges.set(list);
   for (let e = 0; e < list.length; e += STRIDE) {
-    list[e + 1]! -= refZ;
-    list[e + 2]! -= refY;
+    edges[e + 1]! -= refZ;
+    edges[e + 2]! -= refY;
     if (list[e] !== ARC) {
-      list[e + 3]! -= refZ;
-      list[e + 4]! -= refY;
+      edges[e + 3]! -= refZ;
+      edges[e + 4]! -= refY;
     }
   }
   for (let i = 0; i < count; i++) {
@@ -117,12 +166,11 @@ function compile(section: Section, found: IssueCollector): PreparedSection | und
   box[1]! -= refZ;
   box[2]! -= refY;
   box[3]! -= refY;
-  const edges = Float64Array.from(list);
   const tolerance = 1e-9 * Math.max(box[1]! - box[0]!, box[3]! - box[2]!);
 
   // materials: all solid parts have one, or none does
-  const modulus = new Float64Array(count).fill(Number.NaN);
-  const yieldStrength = new Float64Array(count).fill(Number.NaN);
+  modulus.fill(Number.NaN);
+  yieldStrength.fill(Number.NaN);
   let withMaterial = 0;
   let solids = 0;
   for (let i = 0; i < count; i++) {
@@ -149,7 +197,7 @@ function compile(section: Section, found: IssueCollector): PreparedSection | und
   for (let i = 0; i < count; i++) {
     if (sign[i] === 1) continue;
     const samples = boundarySamples(edges, edgeStart[i]!, edgeStart[i + 1]!);
-    const hits = new Int32Array(count);
+    const hits: number[] = new Array<number>(count).fill(0);
     let outside = -1;
     for (let s = 0; s < samples.length; s += 2) {
       const z = samples[s]!;
@@ -185,20 +233,17 @@ function compile(section: Section, found: IssueCollector): PreparedSection | und
   }
 
   // each part's own moments, integrated once: they do not depend on the reference modulus
-  const partMoments = new Float64Array(count * 6);
-  const one = new Float64Array(6);
   let netArea = 0;
   for (let i = 0; i < count; i++) {
-    one.fill(0);
-    addMoments(one, edges, edgeStart[i]!, edgeStart[i + 1]!, 1);
-    partMoments.set(one, i * 6);
-    netArea += sign[i]! * one[0]!;
+    addMoments(partMoments, edges, edgeStart[i]!, edgeStart[i + 1]!, 1, i * 6);
+    netArea += sign[i]! * partMoments[i * 6]!;
   }
   if (found.empty && !(netArea > 1e-12 * (box[1]! - box[0]!) * (box[3]! - box[2]!))) {
     found.add("section-area-not-positive", ["parts"], `The holes take away all of the area; they must not overlap or cover the solids.`, { area: netArea });
   }
   if (!found.empty) return undefined;
-  return { section, count, edges, edgeStart, sign, modulus, yieldStrength, partBox, box, refZ, refY, hasMaterial, netArea, partMoments };
+  const defaultWeights = fillWeights({ count, sign, modulus, hasMaterial }, undefined, ratios, weights);
+  return { section, count, edges, edgeStart, sign, modulus, yieldStrength, partBox, box, refZ, refY, hasMaterial, netArea, partMoments, defaultWeights };
 }
 
 /** Records every problem with the section; returns the compiled form when there is none. */

@@ -6,8 +6,6 @@ import type { SectionPropertiesOptions, SectionProperties, PartProperties } from
 import type { Section } from "./types.js";
 import { partWeights } from "./weights.js";
 
-const total = new Float64Array(6);
-
 /**
  * Elastic properties of a section about its centroid: area, centroid, second moments, product
  * moment, principal axes, extreme fibres, section moduli, radii of gyration and bounding box.
@@ -33,26 +31,30 @@ const total = new Float64Array(6);
 export function sectionProperties(section: Section, options?: SectionPropertiesOptions): SectionProperties {
   const p = prepareSection(section);
   const { referenceModulus, ratios, weights } = partWeights(p, options?.referenceModulus);
-  total.fill(0);
-  const parts: PartProperties[] = [];
   const m = p.partMoments;
-  for (let i = 0; i < p.count; i++) {
+  const count = p.count;
+  let area = 0, my = 0, mz = 0, myy = 0, mzz = 0, myz = 0;
+  for (let i = 0, o = 0; i < count; i++, o += 6) {
     const w = weights[i]!;
-    for (let k = 0; k < 6; k++) total[k]! += w * m[i * 6 + k]!;
-    parts.push({ area: m[i * 6 + M_AREA]!, modularRatio: ratios[i]!, hole: p.sign[i]! < 0, extremes: { top: p.partBox[i * 4 + 3]!, bottom: p.partBox[i * 4 + 2]!, left: p.partBox[i * 4]!, right: p.partBox[i * 4 + 1]! } });
+    area += w * m[o + M_AREA]!;
+    my += w * m[o + M_Y]!;
+    mz += w * m[o + M_Z]!;
+    myy += w * m[o + M_YY]!;
+    mzz += w * m[o + M_ZZ]!;
+    myz += w * m[o + M_YZ]!;
   }
-  const area = total[M_AREA]!;
-  const yc = total[M_Y]! / area;
-  const zc = total[M_Z]! / area;
-  const secondMomentZ = total[M_YY]! - area * yc * yc;
-  const secondMomentY = total[M_ZZ]! - area * zc * zc;
-  const productMoment = total[M_YZ]! - area * yc * zc;
-  for (const part of parts) {
-    const e = part.extremes as { top: number; bottom: number; left: number; right: number };
-    e.top -= yc;
-    e.bottom -= yc;
-    e.left -= zc;
-    e.right -= zc;
+  const yc = my / area;
+  const zc = mz / area;
+  const secondMomentZ = myy - area * yc * yc;
+  const secondMomentY = mzz - area * zc * zc;
+  const productMoment = myz - area * yc * zc;
+  const parts: PartProperties[] = [];
+  const modularRatios: number[] = [];
+  const pb = p.partBox;
+  for (let i = 0, o = 0; i < count; i++, o += 4) {
+    const n = ratios[i]!;
+    modularRatios.push(n);
+    parts.push({ area: m[i * 6 + M_AREA]!, modularRatio: n, hole: p.sign[i]! < 0, extremes: { top: pb[o + 3]! - yc, bottom: pb[o + 2]! - yc, left: pb[o]! - zc, right: pb[o + 1]! - zc } });
   }
   const b = p.box;
   const top = b[3]! - yc;
@@ -70,7 +72,7 @@ export function sectionProperties(section: Section, options?: SectionPropertiesO
     sectionModulus: { top: secondMomentZ / top, bottom: -secondMomentZ / bottom, left: -secondMomentY / left, right: secondMomentY / right },
     radiusOfGyration: { z: Math.sqrt(secondMomentZ / area), y: Math.sqrt(secondMomentY / area) },
     boundingBox: { zMin: b[0]! + p.refZ, zMax: b[1]! + p.refZ, yMin: b[2]! + p.refY, yMax: b[3]! + p.refY },
-    transformed: { referenceModulus, modularRatios: Array.from(ratios) },
+    transformed: { referenceModulus, modularRatios },
     parts,
   };
 }

@@ -7,7 +7,14 @@ function isObject(value: unknown): value is Record<string, unknown> {
   return typeof value === "object" && value !== null && !Array.isArray(value);
 }
 
-function checkPoint(found: IssueCollector, value: unknown, path: IssuePath, what: string): boolean {
+function isFiniteNumber(value: unknown): value is number {
+  return typeof value === "number" && Number.isFinite(value);
+}
+
+// The checks take the parent path and the key, and build the field's path only for a report.
+function checkPoint(found: IssueCollector, value: unknown, parent: IssuePath, key: string | number, what: string): boolean {
+  if (isObject(value) && isFiniteNumber(value["y"]) && isFiniteNumber(value["z"])) return true;
+  const path = [...parent, key];
   if (!isObject(value)) {
     found.add("point-invalid", path, `The ${what} must be an object { y, z }; got ${describeValue(value)}.`);
     return false;
@@ -17,22 +24,24 @@ function checkPoint(found: IssueCollector, value: unknown, path: IssuePath, what
   return okY && okZ;
 }
 
-function checkPositive(found: IssueCollector, value: unknown, path: IssuePath, what: string, code = "dimension-not-positive"): boolean {
+function checkPositive(found: IssueCollector, value: unknown, parent: IssuePath, key: string, what: string, code = "dimension-not-positive"): boolean {
+  if (isFiniteNumber(value) && value > 0) return true;
+  const path = [...parent, key];
   if (!requireFinite(found, value, path, what)) return false;
-  if (value > 0) return true;
   found.add(code, path, `The ${what} must be greater than zero; got ${value}.`, { value });
   return false;
 }
 
-function checkMaterial(found: IssueCollector, value: unknown, path: IssuePath): void {
+function checkMaterial(found: IssueCollector, value: unknown, parent: IssuePath): void {
   if (value === undefined) return;
+  const path = [...parent, "material"];
   if (!isObject(value)) {
     found.add("material-invalid", path, `The material must be an object { elasticModulus }; got ${describeValue(value)}.`);
     return;
   }
-  checkPositive(found, value["elasticModulus"], [...path, "elasticModulus"], "elastic modulus", "elastic-modulus-not-positive");
+  checkPositive(found, value["elasticModulus"], path, "elasticModulus", "elastic modulus", "elastic-modulus-not-positive");
   if (value["yieldStrength"] !== undefined) {
-    checkPositive(found, value["yieldStrength"], [...path, "yieldStrength"], "yield strength", "yield-strength-not-positive");
+    checkPositive(found, value["yieldStrength"], path, "yieldStrength", "yield strength", "yield-strength-not-positive");
   }
   if (value["name"] !== undefined && typeof value["name"] !== "string") {
     found.add("material-invalid", [...path, "name"], `The material name must be a string; got ${describeValue(value["name"])}.`);
@@ -70,8 +79,8 @@ function checkPolygon(found: IssueCollector, part: Record<string, unknown>, path
   for (let i = 0; i < points.length; i++) {
     const p: unknown = points[i];
     // fast path for a well-formed point; the full check (with its path) only when one is not
-    if (isObject(p) && typeof p["y"] === "number" && Number.isFinite(p["y"]) && typeof p["z"] === "number" && Number.isFinite(p["z"])) continue;
-    if (!checkPoint(found, p, [...path, "points", i], `point ${i}`)) ok = false;
+    if (isObject(p) && isFiniteNumber(p["y"]) && isFiniteNumber(p["z"])) continue;
+    if (!checkPoint(found, p, [...path, "points"], i, `point ${i}`)) ok = false;
   }
   if (!ok) return;
   const { zs, ys } = normalisedPolygon(points as { y: number; z: number }[]);
@@ -116,19 +125,19 @@ export function validatePart(found: IssueCollector, part: unknown, path: IssuePa
   if (hole !== undefined && typeof hole !== "boolean") {
     found.add("part-invalid", [...path, "hole"], `"hole" must be true or false; got ${describeValue(hole)}.`);
   }
-  checkMaterial(found, part["material"], [...path, "material"]);
+  checkMaterial(found, part["material"], path);
   const kind = part["kind"];
   switch (kind) {
     case "polygon":
       checkPolygon(found, part, path);
       break;
     case "circle":
-      checkPoint(found, part["centre"], [...path, "centre"], "centre");
-      checkPositive(found, part["radius"], [...path, "radius"], "radius");
+      checkPoint(found, part["centre"], path, "centre", "centre");
+      checkPositive(found, part["radius"], path, "radius", "radius");
       break;
     case "sector": {
-      checkPoint(found, part["centre"], [...path, "centre"], "centre");
-      checkPositive(found, part["radius"], [...path, "radius"], "radius");
+      checkPoint(found, part["centre"], path, "centre", "centre");
+      checkPositive(found, part["radius"], path, "radius", "radius");
       requireFinite(found, part["startAngle"], [...path, "startAngle"], "start angle");
       const sweep = part["sweep"];
       if (requireFinite(found, sweep, [...path, "sweep"], "sweep") && !(sweep > 0 && sweep <= 2 * Math.PI)) {
@@ -137,8 +146,8 @@ export function validatePart(found: IssueCollector, part: unknown, path: IssuePa
       break;
     }
     case "fillet":
-      checkPoint(found, part["corner"], [...path, "corner"], "corner");
-      checkPositive(found, part["radius"], [...path, "radius"], "radius");
+      checkPoint(found, part["corner"], path, "corner", "corner");
+      checkPositive(found, part["radius"], path, "radius", "radius");
       requireFinite(found, part["orientation"], [...path, "orientation"], "orientation");
       break;
     default:

@@ -12,23 +12,16 @@ export interface Weights {
   readonly weights: Float64Array;
 }
 
+/** The parts' data the weights depend on. */
+type WeightInput = Pick<PreparedSection, "count" | "sign" | "modulus" | "hasMaterial">;
+
 /**
- * Weights for a reference modulus (default: that of the first solid part with a material).
- *
- * @throws FlexuraError `reference-modulus-not-positive` (or `not-a-number` / `not-finite`).
+ * Weights for a reference modulus (default: that of the first solid part with a material),
+ * written into `ratios` and `weights` (count numbers each).
  */
-export function partWeights(p: PreparedSection, referenceModulus: number | undefined): Weights {
-  const ratios = new Float64Array(p.count);
-  const weights = new Float64Array(p.count);
-  let ref: number | null = null;
-  if (referenceModulus !== undefined) {
-    if (typeof referenceModulus !== "number" || !Number.isFinite(referenceModulus) || !(referenceModulus > 0)) {
-      const found = new IssueCollector();
-      found.add("reference-modulus-not-positive", ["referenceModulus"], `The reference modulus must be a finite number greater than zero; got ${String(referenceModulus)}.`, { value: String(referenceModulus) });
-      found.throwIfAny();
-    }
-    ref = referenceModulus;
-  } else if (p.hasMaterial) {
+export function fillWeights(p: WeightInput, referenceModulus: number | undefined, ratios: Float64Array, weights: Float64Array): Weights {
+  let ref: number | null = referenceModulus ?? null;
+  if (ref === null && p.hasMaterial) {
     for (let i = 0; i < p.count; i++) {
       if (p.sign[i] === 1) {
         ref = p.modulus[i]!;
@@ -42,4 +35,21 @@ export function partWeights(p: PreparedSection, referenceModulus: number | undef
     weights[i] = p.sign[i]! * n;
   }
   return { referenceModulus: ref, ratios, weights };
+}
+
+/**
+ * Weights for a reference modulus (default: that of the first solid part with a material; the
+ * default weights are part of the prepared section).
+ *
+ * @throws FlexuraError `reference-modulus-not-positive` (or `not-a-number` / `not-finite`).
+ */
+export function partWeights(p: PreparedSection, referenceModulus: number | undefined): Weights {
+  if (referenceModulus === undefined) return p.defaultWeights;
+  if (typeof referenceModulus !== "number" || !Number.isFinite(referenceModulus) || !(referenceModulus > 0)) {
+    const found = new IssueCollector();
+    found.add("reference-modulus-not-positive", ["referenceModulus"], `The reference modulus must be a finite number greater than zero; got ${String(referenceModulus)}.`, { value: String(referenceModulus) });
+    found.throwIfAny();
+  }
+  const both = new Float64Array(2 * p.count);
+  return fillWeights(p, referenceModulus, both.subarray(0, p.count), both.subarray(p.count));
 }
