@@ -37,6 +37,12 @@ function solve(model: Model, scale: ModelScale, section: SectionInSI | undefined
   }
 }
 
+/** True when the section's product moment of area is not negligible (its principal axes are not y and z). */
+function axesInclined(section: SectionInSI): boolean {
+  const p = section.properties;
+  return Math.abs(p.productMoment) > 1e-9 * Math.sqrt(p.secondMomentY * p.secondMomentZ);
+}
+
 /**
  * Analyses a model: converts it to SI, solves the member, and when the model has a section,
  * computes its properties and the extreme bending and shear stresses; checks the member against
@@ -66,9 +72,15 @@ function solve(model: Model, scale: ModelScale, section: SectionInSI | undefined
  */
 export function analyzeModel(model: Model): ModelAnalysis {
   const scale = fullScale(model);
-  const section = model.section === undefined ? undefined : sectionInSI(model.section, scale);
+  const section = sectionInSI(model, scale);
   const solution = solve(model, scale, section);
   const warnings: ModelWarning[] = solution.warnings.map((w) => ({ code: w.code, message: w.message }));
+  if (section !== undefined && axesInclined(section)) {
+    warnings.push({
+      code: "section-axes-inclined",
+      message: "The section's principal axes are inclined (I_yz is not 0, as for an angle): the stresses and deflections are for bending about the horizontal axis, which holds only when the member is restrained from deflecting sideways.",
+    });
+  }
   const { checks, stress } = modelVerdicts(model, solution, section, scale, warnings);
   const peaks = solution.peaks;
   const results = withoutNegativeZero({

@@ -16,7 +16,8 @@ import {
 import { FlexuraError, isFlexuraError } from "../errors/index.js";
 import type { ModelCheck, ModelScale, ModelStress, ModelStressExtreme, ModelWarning } from "./analysis.js";
 import type { Model, ModelDeflectionLimit } from "./model.js";
-import type { SectionInSI } from "./model-section.js";
+import { isMultiMaterial, type SectionInSI } from "./model-section.js";
+import type { ModelBuiltUpSection } from "./section-types.js";
 
 const fmt = (x: number): string => String(Number(x.toPrecision(6)));
 
@@ -53,7 +54,7 @@ function deflectionDescription(model: Model, d: SpanDeflection, scale: ModelScal
   return `deflection of ${what} against ${against}`;
 }
 
-function inModelUnits(c: CheckResult, model: Model, scale: ModelScale, context: { deflections: readonly SpanDeflection[]; peaks?: readonly PeakBendingStress[] }): ModelCheck {
+function inModelUnits(c: CheckResult, model: Model, scale: ModelScale, context: { deflections: readonly SpanDeflection[]; part?: number }): ModelCheck {
   const base = { demand: 0, capacity: 0, utilisation: c.utilisation, pass: c.pass, at: c.at.x / scale.length };
   const units = model.units;
   switch (c.check) {
@@ -66,8 +67,7 @@ function inModelUnits(c: CheckResult, model: Model, scale: ModelScale, context: 
     case "bending-tension":
     case "bending-compression": {
       const sense = c.check === "bending-tension" ? "tension" : "compression";
-      const peak = context.peaks?.[sense === "tension" ? 0 : 1];
-      const inPart = peak === undefined || peak.part < 0 ? "" : ` in part ${peak.part}`;
+      const inPart = context.part === undefined ? "" : ` in part ${context.part}`;
       const capacity = c.capacity / scale.stress;
       return {
         kind: c.check,
@@ -97,33 +97,68 @@ function inModelUnits(c: CheckResult, model: Model, scale: ModelScale, context: 
   }
 }
 
-function extremeOf(p: PeakBendingStress, scale: ModelScale): ModelStressExtreme {
-  return { value: p.stress / scale.stress, at: p.x / scale.length, y: p.y / scale.sectionLength, ...(p.part < 0 ? {} : { part: p.part }) };
+function extremeOf(p: PeakBendingStress, scale: ModelScale, multiMaterial: boolean): ModelStressExtreme {
+  return { value: p.stress / scale.stress, at: p.x / scale.length, y: p.y / scale.sectionLength, ...(multiMaterial && p.part >= 0 ? { part: p.part } : {}) };
 }
 
-function stressOf(r: MemberCheck, scale: ModelScale): ModelStress {
+function stressOf(r: MemberCheck, scale: ModelScale, multiMaterial: boolean): ModelStress {
   const s = r.stresses;
   const v = s.shear;
   return {
-    tension: extremeOf(s.tension, scale),
-    compression: extremeOf(s.compression, scale),
+    tension: extremeOf(s.tension, scale, multiMaterial),
+    compression: extremeOf(s.compression, scale, multiMaterial),
     ...(v === null || v.shear === 0 ? {} : { shear: { value: v.stress / scale.stress, at: v.x / scale.length, y: v.y / scale.sectionLength } }),
   };
 }
 
+/**
+ * For a section of several materials: the allowable bending stress of each part in SI (a part's
+ * own, else `limits.bendingStress` for parts of the model's material; null for holes and for
+ * parts of another material without one), and the parts of another material left unchecked.
+ */
+function partAllowables(model: Model, section: ModelBuiltUpSection, scale: ModelScale): { byPart: (number | null)[]; unchecked: number[] } {
+  const common = model.limits.bendingStress;
+  const unchecked: number[] = [];
+  const byPart = section.parts.map((p, i) => {
+    if (p.hole) return null;
+    if (p.bendingStress !== undefined) return p.bendingStress * scale.stress;
+    if (p.material === undefined && p.modularRatio === undefined) return common === undefined ? null : common * scale.stress;
+    unchecked.push(i);
+    return null;
+  });
+  return { byPart, unchecked: byPart.some((b) => b !== null) ? unchecked : [] };
+}
+
 /** Runs the check module on a member with a section; its problems are reported under `section`. */
-function withSection(model: Model, solution: BeamSolution, section: SectionInSI, scale: ModelScale): ModelVerdicts {
+function withSection(model: Model, solution: BeamSolution, section: SectionInSI, scale: ModelScale, warnings: ModelWarning[]): ModelVerdicts {
+  const multi = model.section !== undefined && isMultiMaterial(model.section) ? partAllowables(model, model.section, scale) : undefined;
+  const { bendingStress: _common, ...others } = memberLimitsInSI(model, scale);
+  const limits: MemberLimits = multi === undefined ? memberLimitsInSI(model, scale) : { ...others, bendingStressByPart: multi.byPart };
+  if (multi !== undefined && multi.unchecked.length > 0) {
+    warnings.push({
+      code: "part-bending-stress-not-checked",
+      message: `The bending stress in part${multi.unchecked.length === 1 ? "" : "s"} ${multi.unchecked.join(", ")} of the section is not checked: a part of its own material needs its own "bendingStress".`,
+    });
+  }
   let r: MemberCheck;
   try {
-    r = checkMember(solution, memberSection(section.geometry, section.referenceModulus === undefined ? undefined : { referenceModulus: section.referenceModulus }), memberLimitsInSI(model, scale));
+    r = checkMember(solution, memberSection(section.geometry, section.referenceModulus === undefined ? undefined : { referenceModulus: section.referenceModulus }), limits);
   } catch (e) {
     if (!isFlexuraError(e)) throw e;
     throw new FlexuraError(e.issues.map((i) => ({ ...i, path: i.path[0] === "limits" ? i.path : ["section"] })));
   }
-  const peaks = [r.stresses.tension, r.stresses.compression];
+  // checkMember gives the bending checks of the parts in part order, tension then compression.
+  const checkedParts = multi?.byPart.flatMap((b, i) => (b === null ? [] : [i])) ?? [];
+  let bending = 0;
+  const withPart = r.checks.map((c) => {
+    if (multi === undefined || (c.check !== "bending-tension" && c.check !== "bending-compression")) return { c };
+    const part = checkedParts[Math.floor(bending++ / 2)];
+    return part === undefined ? { c } : { c, part };
+  });
   // Deflection checks first, then stresses: the order the model's results have always had.
-  const ordered = [...r.checks.filter((c) => c.check === "deflection"), ...r.checks.filter((c) => c.check !== "deflection")];
-  return { checks: ordered.map((c) => inModelUnits(c, model, scale, { deflections: r.deflections, peaks })), stress: stressOf(r, scale) };
+  const ordered = [...withPart.filter((x) => x.c.check === "deflection"), ...withPart.filter((x) => x.c.check !== "deflection")];
+  const checks = ordered.map((x) => inModelUnits(x.c, model, scale, { deflections: r.deflections, ...(x.part === undefined ? {} : { part: x.part }) }));
+  return { checks, stress: stressOf(r, scale, section.referenceModulus !== undefined) };
 }
 
 /**
@@ -132,7 +167,7 @@ function withSection(model: Model, solution: BeamSolution, section: SectionInSI,
  * limits then cannot be checked: the warning `stress-limit-without-section` is added).
  */
 export function modelVerdicts(model: Model, solution: BeamSolution, section: SectionInSI | undefined, scale: ModelScale, warnings: ModelWarning[]): ModelVerdicts {
-  if (section !== undefined) return withSection(model, solution, section, scale);
+  if (section !== undefined) return withSection(model, solution, section, scale, warnings);
   const { bendingStress, shearStress, deflection } = model.limits;
   if (bendingStress !== undefined || shearStress !== undefined) {
     warnings.push({ code: "stress-limit-without-section", message: 'The stress limits are not checked: give a "section" so that stresses can be computed.' });

@@ -1,3 +1,5 @@
+import type { ModelFileMaterial, ModelFileSection } from "./file-section.js";
+
 /**
  * A quantity in a model file: a plain number in the model's unit for that kind of quantity, or a
  * string with its own unit such as `"3.5 m"`, `"29000 ksi"` or `"5000 kN/m"`.
@@ -36,14 +38,6 @@ export interface ModelFileUnits {
   readonly translationalStiffness?: string;
   /** Rotational spring stiffness (default moment/rad). */
   readonly rotationalStiffness?: string;
-}
-
-/** A section as written in a model file: a shape name and its dimensions. */
-export interface ModelFileSection {
-  /** The shape: `"rectangle"`, `"circle"`, `"pipe"`, `"i-section"`, `"tee"`. */
-  readonly shape: string;
-  /** Its dimensions by name (see docs/model-format.md), in the section-length unit or with units. */
-  readonly [dimension: string]: ModelQuantity;
 }
 
 /** A support as written in a model file (`type` rather than `kind`). */
@@ -124,14 +118,7 @@ export interface ModelFile {
   /** A standard shape and its dimensions, such as `{ "shape": "rectangle", "width": 90, "depth": 240 }`. */
   readonly section?: ModelFileSection;
   /** The section's material. */
-  readonly material?: {
-    /** A label. */
-    readonly name?: string;
-    /** Modulus of elasticity. */
-    readonly E: ModelQuantity;
-    /** Yield strength. */
-    readonly yieldStrength?: ModelQuantity;
-  };
+  readonly material?: ModelFileMaterial;
   /** Supports. */
   readonly supports: readonly ModelFileSupport[];
   /** Internal hinge positions. */

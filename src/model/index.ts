@@ -11,8 +11,22 @@ export type {
   ModelDeflectionLimit,
   ModelLimits,
   ModelMaterial,
-  ModelSection,
 } from "./model.js";
+export type {
+  ModelSection,
+  ModelShapeName,
+  ModelShapeSection,
+  ModelPlate,
+  ModelWebPlate,
+  ModelPlateGirderSection,
+  ModelSectionPoint,
+  ModelPolygonPart,
+  ModelCirclePart,
+  ModelSectorPart,
+  ModelFilletPart,
+  ModelSectionPart,
+  ModelBuiltUpSection,
+} from "./section-types.js";
 export { MODEL_FORMAT_VERSION } from "./model.js";
 export type {
   ModelAnalysis,
@@ -31,7 +45,17 @@ export type {
   ModelWarning,
   ModelScale,
 } from "./analysis.js";
-export type { ModelFile, ModelFileSection, ModelFileUnits, ModelFileSupport, ModelFileLoad, ModelQuantity } from "./file.js";
+export type { ModelFile, ModelFileUnits, ModelFileSupport, ModelFileLoad, ModelQuantity } from "./file.js";
+export type {
+  ModelFileSection,
+  ModelFileShapeSection,
+  ModelFilePlateGirderSection,
+  ModelFileBuiltUpSection,
+  ModelFileSectionPart,
+  ModelFilePartCommon,
+  ModelFilePoint,
+  ModelFileMaterial,
+} from "./file-section.js";
 export type { ModelJsonSchema } from "./schema.js";
 export { modelSchema, MODEL_SCHEMA_ID } from "./schema.js";
 export { parseModel, tryParseModel } from "./parse.js";

@@ -4,6 +4,8 @@
  * JSON `type` tags renamed to `kind` (a JSON `"moment"` load becomes a `"couple"`).
  */
 
+import type { ModelSection } from "./section-types.js";
+
 /** The model-file format version this release writes and reads. */
 export const MODEL_FORMAT_VERSION = 1;
 
@@ -164,18 +166,6 @@ export interface ModelMaterial {
   readonly E: number;
   /** Yield strength, in the stress unit. */
   readonly yieldStrength?: number;
-}
-
-/**
- * A cross-section given by a standard shape and its dimensions (each in the section-length unit).
- * `shape` names the builder (`"rectangle"`, `"i-section"`, ...); `dimensions` holds its named
- * dimensions exactly as written in the file, converted to numbers.
- */
-export interface ModelSection {
-  /** The shape's name as written in the model file, such as `"i-section"`. */
-  readonly shape: string;
-  /** The shape's dimensions by name, in the section-length unit. */
-  readonly dimensions: Readonly<Record<string, number>>;
 }
 
 /**

@@ -1,6 +1,7 @@
 import { attempt, FlexuraError, issue, type FlexuraIssue, type Result } from "../errors/index.js";
 import { MODEL_FORMAT_VERSION, type Model } from "./model.js";
-import { readHinges, readLimits, readLoads, readMaterial, readSection, readSegments, readSupports } from "./read-parts.js";
+import { readHinges, readLimits, readLoads, readMaterial, readSegments, readSupports } from "./read-parts.js";
+import { readSection } from "./read-section.js";
 import { objectAt, readQuantity, requirePositive, type Reader } from "./reader.js";
 import { resolveUnits, scaleOfUnits } from "./units.js";
 import { structuralIssues } from "./validate.js";

@@ -1,7 +1,6 @@
-import { issue } from "../errors/index.js";
-import type { ModelDeflectionLimit, ModelLimits, ModelLoad, ModelMaterial, ModelSection, ModelSegment, ModelSupport } from "./model.js";
+import { issue, type IssuePath } from "../errors/index.js";
+import type { ModelDeflectionLimit, ModelLimits, ModelLoad, ModelMaterial, ModelSegment, ModelSupport } from "./model.js";
 import { arrayAt, objectAt, readQuantity, requireNotNegative, requireOnMember, requirePositive, type Reader } from "./reader.js";
-import { SHAPES } from "./schema-section.js";
 
 type Json = Readonly<Record<string, unknown>>;
 
@@ -108,28 +107,14 @@ export function readSegments(reader: Reader, value: unknown, defaultE: number | 
   return out;
 }
 
-/** Reads the section's dimensions (each positive), or undefined for an unknown shape. */
-export function readSection(reader: Reader, value: unknown): ModelSection | undefined {
-  const s = objectAt(value);
-  const spec = SHAPES.find((x) => x.shape === s["shape"]);
-  if (spec === undefined) return undefined;
-  const dimensions: Record<string, number> = {};
-  for (const dim of [...spec.required, ...spec.optional]) {
-    const read = readQuantity(reader, s[dim.name], "sectionLength", ["section", dim.name]);
-    requirePositive(reader, read, ["section", dim.name], `section's ${dim.name}`);
-    if (read !== undefined) dimensions[dim.name] = read;
-  }
-  return { shape: spec.shape, dimensions };
-}
-
 /** Reads the material, or undefined when it is absent or its E cannot be read. */
-export function readMaterial(reader: Reader, value: unknown): ModelMaterial | undefined {
+export function readMaterial(reader: Reader, value: unknown, path: IssuePath = ["material"]): ModelMaterial | undefined {
   if (value === undefined) return undefined;
   const m = objectAt(value);
-  const E = readQuantity(reader, m["E"], "modulus", ["material", "E"]);
-  requirePositive(reader, E, ["material", "E"], "modulus of elasticity");
-  const yieldStrength = readQuantity(reader, m["yieldStrength"], "stress", ["material", "yieldStrength"]);
-  requirePositive(reader, yieldStrength, ["material", "yieldStrength"], "yield strength");
+  const E = readQuantity(reader, m["E"], "modulus", [...path, "E"]);
+  requirePositive(reader, E, [...path, "E"], "modulus of elasticity");
+  const yieldStrength = readQuantity(reader, m["yieldStrength"], "stress", [...path, "yieldStrength"]);
+  requirePositive(reader, yieldStrength, [...path, "yieldStrength"], "yield strength");
   if (E === undefined) return undefined;
   return { ...(typeof m["name"] === "string" ? { name: m["name"] } : {}), E, ...(yieldStrength === undefined ? {} : { yieldStrength }) };
 }

@@ -1,5 +1,41 @@
 import type { ModelFile, ModelFileLoad, ModelFileSupport } from "./file.js";
-import type { Model, ModelLoad, ModelSupport } from "./model.js";
+import type { ModelFileMaterial, ModelFileSection, ModelFileSectionPart } from "./file-section.js";
+import type { Model, ModelLoad, ModelMaterial, ModelSupport } from "./model.js";
+import type { ModelSection, ModelSectionPart } from "./section-types.js";
+
+const materialToJson = (m: ModelMaterial): ModelFileMaterial => ({ ...m });
+
+function partToJson(p: ModelSectionPart): ModelFileSectionPart {
+  const common = {
+    ...(p.hole ? { hole: true } : {}),
+    ...(p.material === undefined ? {} : { material: materialToJson(p.material) }),
+    ...(p.modularRatio === undefined ? {} : { modularRatio: p.modularRatio }),
+    ...(p.bendingStress === undefined ? {} : { bendingStress: p.bendingStress }),
+  };
+  switch (p.kind) {
+    case "polygon":
+      return { type: "polygon", points: p.points.map((q) => ({ y: q.y, z: q.z })), ...common };
+    case "circle":
+      return { type: "circle", centre: { ...p.centre }, radius: p.radius, ...common };
+    case "sector":
+      return { type: "sector", centre: { ...p.centre }, radius: p.radius, startAngle: p.startAngle, sweep: p.sweep, ...common };
+    case "fillet":
+      return { type: "fillet", corner: { ...p.corner }, radius: p.radius, orientation: p.orientation, ...common };
+    default:
+      return p satisfies never;
+  }
+}
+
+function sectionToJson(s: ModelSection): ModelFileSection {
+  switch (s.shape) {
+    case "plate-girder":
+      return { shape: "plate-girder", topFlange: { ...s.topFlange }, web: { ...s.web }, ...(s.bottomFlange === undefined ? {} : { bottomFlange: { ...s.bottomFlange } }) };
+    case "built-up":
+      return { shape: "built-up", parts: s.parts.map(partToJson) };
+    default:
+      return { ...s.dimensions, shape: s.shape };
+  }
+}
 
 function supportToJson(s: ModelSupport): ModelFileSupport {
   return {
@@ -50,8 +86,8 @@ export function modelToJson(model: Model): ModelFile {
     ...(model.E === undefined ? {} : { E: model.E }),
     ...(model.I === undefined ? {} : { I: model.I }),
     ...(model.segments === undefined ? {} : { segments: model.segments.map((s) => ({ from: s.from, to: s.to, E: s.E, I: s.I })) }),
-    ...(model.section === undefined ? {} : { section: { shape: model.section.shape, ...model.section.dimensions } }),
-    ...(model.material === undefined ? {} : { material: { ...model.material } }),
+    ...(model.section === undefined ? {} : { section: sectionToJson(model.section) }),
+    ...(model.material === undefined ? {} : { material: materialToJson(model.material) }),
     supports: model.supports.map(supportToJson),
     hinges: [...model.hinges],
     loads: model.loads.map(loadToJson),

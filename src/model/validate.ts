@@ -34,7 +34,7 @@ function titleOf(node: Node): string | undefined {
   return target === undefined ? undefined : titleOf(target);
 }
 
-const TYPE_WORDS: Readonly<Record<string, string>> = { string: "a string", number: "a number", object: "an object", array: "a list" };
+const TYPE_WORDS: Readonly<Record<string, string>> = { string: "a string", number: "a number", object: "an object", array: "a list", boolean: "true or false" };
 
 function expected(node: Node): string {
   const title = titleOf(node);

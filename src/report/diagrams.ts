@@ -118,7 +118,8 @@ function memberDrawing(analysis: ModelAnalysis, name: string): MemberDrawing {
 /**
  * The section drawing's data: the profile is linear over the depth, sigma = -(M / I) y, with
  * M / I taken from the governing extreme stress (the larger magnitude of tension and
- * compression), so that it needs no unit conversion.
+ * compression), so that it needs no unit conversion; for a section of several materials, from
+ * the moment and the transformed I_z, in the model's material.
  */
 function sectionDrawing(analysis: ModelAnalysis, name: string, outline: readonly DrawnSectionPart[] | undefined): SectionDrawing | undefined {
   const s = analysis.section;
@@ -126,12 +127,20 @@ function sectionDrawing(analysis: ModelAnalysis, name: string, outline: readonly
   if (outline === undefined || s === undefined || st === undefined) return undefined;
   const u = analysis.units;
   const governing = Math.abs(st.tension.value) >= Math.abs(st.compression.value) ? st.tension : st.compression;
-  const curvature = governing.y === 0 ? 0 : -governing.value / governing.y;
   const bottom = -s.yBottom;
   const top = s.yTop;
   const left = diagramValueAt(analysis.diagrams.moment, governing.at, "left");
   const right = diagramValueAt(analysis.diagrams.moment, governing.at, "right");
   const moment = Math.abs(left) > Math.abs(right) ? left : right;
+  // Several materials: the governing stress carries its part's modular ratio, so draw -M y / I_t of
+  // the reference material (the model's) from the moment itself, converted through the scale.
+  const multi = governing.part !== undefined;
+  const sc = analysis.scale;
+  const curvature = multi
+    ? (moment * sc.moment * sc.sectionLength) / (s.secondMomentZ * sc.secondMoment * sc.stress)
+    : governing.y === 0
+      ? 0
+      : -governing.value / governing.y;
   return {
     title: `${name}: cross-section (${s.shape})`,
     lengthUnit: u.sectionLength,
@@ -142,6 +151,6 @@ function sectionDrawing(analysis: ModelAnalysis, name: string, outline: readonly
       [s.centroid.y + bottom, -curvature * bottom],
       [s.centroid.y + top, -curvature * top],
     ],
-    stressNote: `at x = ${formatReportQuantity(governing.at, u.length)}, M = ${formatReportQuantity(moment, u.moment)}`,
+    stressNote: `at x = ${formatReportQuantity(governing.at, u.length)}, M = ${formatReportQuantity(moment, u.moment)}${multi ? ", reference material" : ""}`,
   };
 }

@@ -1,4 +1,4 @@
-import type { Model, ModelLoad, ModelSupport } from "../model/index.js";
+import type { Model, ModelLoad, ModelSection, ModelSupport } from "../model/index.js";
 import { formatReportNumber, formatReportQuantity, textTable } from "./format.js";
 
 /**
@@ -60,9 +60,7 @@ function stiffnessLines(model: Model): string[] {
     );
   }
   if (model.section !== undefined) {
-    const dims = Object.entries(model.section.dimensions)
-      .map(([k, v]) => `${k} ${formatReportQuantity(v, u.sectionLength)}`)
-      .join(", ");
+    const dims = sectionDimensions(model.section, u.sectionLength);
     lines.push(`  Section: ${model.section.shape}${dims === "" ? "" : ` (${dims})`}`);
   }
   if (model.material !== undefined) {
@@ -121,4 +119,24 @@ function limitsLine(model: Model): string {
   if (model.limits.bendingStress !== undefined) parts.push(`bending stress ${formatReportQuantity(model.limits.bendingStress, u.stress)}`);
   if (model.limits.shearStress !== undefined) parts.push(`shear stress ${formatReportQuantity(model.limits.shearStress, u.stress)}`);
   return parts.length === 0 ? "none given" : parts.join("; ");
+}
+
+/** The section's dimensions as one line: named dimensions, plates, or the count of parts. */
+function sectionDimensions(section: ModelSection, unit: string): string {
+  const q = (v: number): string => formatReportQuantity(v, unit);
+  switch (section.shape) {
+    case "plate-girder": {
+      const plate = (name: string, p: { width: number; thickness: number } | undefined): string => (p === undefined ? "" : `, ${name} ${q(p.width)} x ${q(p.thickness)}`);
+      return `top flange ${q(section.topFlange.width)} x ${q(section.topFlange.thickness)}, web ${q(section.web.depth)} x ${q(section.web.thickness)}${plate("bottom flange", section.bottomFlange)}`;
+    }
+    case "built-up": {
+      const holes = section.parts.filter((p) => p.hole).length;
+      const n = section.parts.length;
+      return `${n} part${n === 1 ? "" : "s"}${holes === 0 ? "" : `, ${holes} of them hole${holes === 1 ? "" : "s"}`}`;
+    }
+    default:
+      return Object.entries(section.dimensions)
+        .map(([k, v]) => `${k} ${q(v)}`)
+        .join(", ");
+  }
 }

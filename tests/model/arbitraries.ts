@@ -38,9 +38,41 @@ const load = fc.oneof(
   fc.record({ type: fc.constant("distributed"), from: maybe(quantity), to: maybe(quantity), start: quantity, end: maybe(quantity) }).map(clean),
 );
 
-const section = fc.constantFrom(...SHAPES).chain((spec) =>
-  fc.tuple(...spec.required.map(() => quantity)).map((values) => ({ shape: spec.shape, ...Object.fromEntries(spec.required.map((d, i) => [d.name, values[i]])) })),
+const shapeSection = fc.constantFrom(...SHAPES).chain((spec) =>
+  fc
+    .tuple(fc.tuple(...spec.required.map(() => quantity)), fc.tuple(...spec.optional.map(() => maybe(quantity))))
+    .map(([values, optional]) =>
+      clean({
+        shape: spec.shape,
+        ...Object.fromEntries(spec.required.map((d, i) => [d.name, values[i]])),
+        ...Object.fromEntries(spec.optional.map((d, i) => [d.name, optional[i]])),
+      }),
+    ),
 );
+
+const plate = fc.record({ width: quantity, thickness: quantity });
+const plateGirder = fc
+  .record({ shape: fc.constant("plate-girder"), topFlange: plate, web: fc.record({ depth: quantity, thickness: quantity }), bottomFlange: maybe(plate) })
+  .map(clean);
+
+const point = fc.record({ y: quantity, z: quantity });
+const partExtras = fc
+  .record({ hole: maybe(fc.boolean()), material: maybe(fc.record({ E: quantity, name: maybe(fc.string()) }).map(clean)), modularRatio: maybe(fc.double({ noNaN: true, noDefaultInfinity: true })) })
+  .map((x) => clean(x.material === undefined ? x : { ...x, modularRatio: undefined }));
+const part = fc
+  .tuple(
+    fc.oneof(
+      fc.record({ type: fc.constant("polygon"), points: fc.array(point, { minLength: 3, maxLength: 5 }) }),
+      fc.record({ type: fc.constant("circle"), centre: point, radius: quantity }),
+      fc.record({ type: fc.constant("sector"), centre: point, radius: quantity, startAngle: quantity, sweep: quantity }),
+      fc.record({ type: fc.constant("fillet"), corner: point, radius: quantity, orientation: quantity }),
+    ),
+    partExtras,
+  )
+  .map(([p, extras]) => ({ ...p, ...extras }));
+const builtUp = fc.record({ shape: fc.constant("built-up"), parts: fc.array(part, { minLength: 1, maxLength: 3 }) });
+
+const section = fc.oneof(shapeSection, plateGirder, builtUp);
 
 /** Model files that satisfy the schema (structure), whatever their numbers mean. */
 export const structurallyValidModel = fc
@@ -65,8 +97,8 @@ type Json = Record<string, unknown>;
 
 /** One structural change that may or may not break a valid model. */
 const mutation = fc.oneof(
-  fc.record({ op: fc.constant("delete" as const), key: fc.constantFrom("length", "supports", "at", "type", "value", "start", "shape", "E", "I", "stiffness") }),
-  fc.record({ op: fc.constant("set" as const), key: fc.constantFrom("length", "supports", "loads", "at", "type", "value", "units", "format", "case", "lenght", "stiffness", "rotation", "depth", "hinges", "limits"), value: fc.jsonValue({ maxDepth: 2 }) }),
+  fc.record({ op: fc.constant("delete" as const), key: fc.constantFrom("length", "supports", "at", "type", "value", "start", "shape", "E", "I", "stiffness", "parts", "points", "radius", "web", "y") }),
+  fc.record({ op: fc.constant("set" as const), key: fc.constantFrom("length", "supports", "loads", "at", "type", "value", "units", "format", "case", "lenght", "stiffness", "rotation", "depth", "hinges", "limits", "parts", "hole", "modularRatio", "material", "topFlange", "z", "sweep"), value: fc.jsonValue({ maxDepth: 2 }) }),
 );
 
 function mutate(value: unknown, m: { op: "delete" | "set"; key: string; value?: unknown }, pick: number): unknown {

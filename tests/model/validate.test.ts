@@ -35,7 +35,7 @@ describe("structuralIssues", () => {
     `);
     expect(list({ ...base, section: { shape: "hexagon" } })).toMatchInlineSnapshot(`
       [
-        "section.shape [not-an-option] Expected one of "rectangle", "circle", "pipe", "i-section", "tee"; got "hexagon".",
+        "section.shape [not-an-option] Expected one of "rectangle", "circle", "pipe", "i-section", "tee", "channel", "angle", "rectangular-hollow", "plate-girder", "built-up"; got "hexagon".",
       ]
     `);
   });
