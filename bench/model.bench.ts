@@ -21,6 +21,26 @@ const file = {
   limits: { deflection: "span/360", bendingStress: "165 MPa", shearStress: "95 MPa" },
 };
 const model = parseModel(file);
+
+// An invented flitch beam: two timber plies and a steel plate with bolt holes, a built-up section of two materials.
+const box = (z0: number, z1: number) => ({ type: "polygon", points: [{ y: 0, z: z0 }, { y: 0, z: z1 }, { y: 240, z: z1 }, { y: 240, z: z0 }] });
+const flitch = parseModel({
+  length: 4.8,
+  material: { name: "timber", E: "11 GPa" },
+  section: {
+    shape: "built-up",
+    parts: [
+      box(0, 45),
+      { ...box(45, 55), material: { name: "steel", E: "200 GPa" }, bendingStress: "165 MPa" },
+      box(55, 100),
+      { type: "circle", centre: { y: 120, z: 22.5 }, radius: 7, hole: true },
+      { type: "circle", centre: { y: 120, z: 77.5 }, radius: 7, hole: true },
+    ],
+  },
+  supports: [{ at: 0, type: "pin" }, { at: 4.8, type: "roller" }],
+  loads: [{ type: "distributed", start: 2.2 }, { type: "point", at: 1.6, value: 1.5 }],
+  limits: { deflection: "span/300", bendingStress: "12 MPa", shearStress: "1.8 MPa" },
+});
 const analysis = analyzeModel(model);
 
 suite("model", () => {
@@ -28,4 +48,5 @@ suite("model", () => {
   bench("model: analyzeModel (solve, section, stresses, checks)", () => analyzeModel(model));
   bench("model: parse + analyze + analysisToJson", () => analysisToJson(analyzeModel(parseModel(file))));
   bench("model: analysisToJson alone", () => analysisToJson(analysis));
+  bench("model: analyzeModel (built-up section of two materials, checks part by part)", () => analyzeModel(flitch));
 });

@@ -78,7 +78,7 @@ export interface ModelDiagrams {
 export interface ModelSectionResult {
   /** The shape name from the model file. */
   readonly shape: string;
-  /** Area, in the area unit. */
+  /** Area, in the area unit; for a built-up section of several materials, transformed to the model's material. */
   readonly area: number;
   /** Centroid, in the section-length unit, in the shape's own coordinates (y up, z horizontal). */
   readonly centroid: {
@@ -87,7 +87,10 @@ export interface ModelSectionResult {
     /** Horizontal position of the centroid. */
     readonly z: number;
   };
-  /** Second moment about the horizontal centroidal axis (bending axis), in the second-moment unit. */
+  /**
+   * Second moment about the horizontal centroidal axis (bending axis), in the second-moment unit;
+   * for several materials, of the section transformed to the model's material (the stiffness is E I_z).
+   */
   readonly secondMomentZ: number;
   /** Second moment about the vertical centroidal axis, in the second-moment unit. */
   readonly secondMomentY: number;

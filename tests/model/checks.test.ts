@@ -2,7 +2,7 @@ import { describe, expect, it } from "vitest";
 import { fc, test } from "@fast-check/vitest";
 import { checkMember, memberSection, type DeflectionLimit } from "../../src/check/index.js";
 import { analyzeModel, parseModel } from "../../src/model/index.js";
-import { iSection, rectangle, type Section } from "../../src/section/index.js";
+import { builtUp, iSection, rectangle, type Section, type SectionPart } from "../../src/section/index.js";
 import { physicalMember, writeMember } from "./sound-models.js";
 
 const near = (a: number, b: number, rel = 1e-9): void => {
@@ -54,6 +54,42 @@ describe("analyzeModel's checks are checkMember's", () => {
     expect(a.pass).toBe(direct.pass);
     near(a.stress!.tension.value * 1e6, direct.stresses.tension.stress);
     near(a.stress!.compression.value * 1e6, direct.stresses.compression.stress);
+  });
+});
+
+describe("analyzeModel's checks of a section of two materials are checkMember's, part by part", () => {
+  const plies = fc.record({ ply: fc.integer({ min: 30, max: 80 }), plate: fc.integer({ min: 5, max: 20 }), depth: fc.integer({ min: 150, max: 400 }), timber: fc.integer({ min: 5, max: 20 }), steel: fc.integer({ min: 100, max: 300 }) });
+  test.prop([physicalMember, plies], { numRuns: 60 })("a flitch beam's bending checks per part, shear and deflection equal a direct checkMember call with bendingStressByPart", (member, d) => {
+    const corners = (z0: number, z1: number) => [{ y: 0, z: z0 }, { y: 0, z: z1 }, { y: d.depth, z: z1 }, { y: d.depth, z: z0 }];
+    const { E: _E, I: _I, ...file } = writeMember(member, "siKilonewtonMetre");
+    const Et = 11e9;
+    const a = analyzeModel(
+      parseModel({
+        ...file,
+        material: { E: `${Et} Pa` },
+        section: {
+          shape: "built-up",
+          parts: [
+            { type: "polygon", points: corners(0, d.ply) },
+            { type: "polygon", points: corners(d.ply, d.ply + d.plate), material: { E: "200 GPa" }, bendingStress: d.steel },
+            { type: "polygon", points: corners(d.ply + d.plate, 2 * d.ply + d.plate) },
+          ],
+        },
+        limits: { deflection: "span/300", bendingStress: d.timber, shearStress: 2 },
+      }),
+    );
+    const m = (p: { y: number; z: number }[], E: number): SectionPart => ({ kind: "polygon", points: p.map((q) => ({ y: q.y / 1000, z: q.z / 1000 })), material: { elasticModulus: E } });
+    const geometry = builtUp([m(corners(0, d.ply), Et), m(corners(d.ply, d.ply + d.plate), 200e9), m(corners(d.ply + d.plate, 2 * d.ply + d.plate), Et)]);
+    const direct = checkMember(a.solution!, memberSection(geometry, { referenceModulus: Et }), {
+      bendingStressByPart: [d.timber * 1e6, d.steel * 1e6, d.timber * 1e6],
+      shearStress: 2e6,
+      deflection: { kind: "ratio", ratio: 300, cantileverFactor: 1 },
+    });
+    const ours = [...a.checks].sort((x, y) => x.kind.localeCompare(y.kind) || (x.span ?? 0) - (y.span ?? 0));
+    expect(ours.map((c) => [c.kind, c.pass])).toEqual([...direct.checks].sort((x, y) => x.check.localeCompare(y.check) || (x.at.span ?? 0) - (y.at.span ?? 0)).map((c) => [c.check, c.pass]));
+    const tension = a.checks.filter((c) => c.kind === "bending-tension");
+    direct.stresses.parts.forEach((p, i) => near(tension[i]!.demand * 1e6, p.tension.stress));
+    expect(a.pass).toBe(direct.pass);
   });
 });
 
