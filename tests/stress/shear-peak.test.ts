@@ -201,13 +201,19 @@ describe("peak shear stress from roots: laws", () => {
   test.prop(
     [fc.double({ min: 20, max: 200, noNaN: true }), fc.double({ min: 20, max: 200, noNaN: true }), fc.double({ min: 0.05, max: 0.45, noNaN: true }), fc.double({ min: -0.4, max: 0.4, noNaN: true })],
     { numRuns: 80 },
-  )("sectionPeakShearStress(arcs: half disc on a plate, plate with an off-centre bore) is no less than tau at any height and equals the old search", (w, h, hole, shift) => {
+  )("sectionPeakShearStress(arcs: half disc on a plate, plate with an off-centre bore, two materials) is no less than tau at any height and equals the old search", (w, h, hole, shift) => {
     const r = w / 2;
     const halfDisc = section([box(-r, -h, r, 0), { kind: "sector", centre: { y: 0, z: 0 }, radius: r, startAngle: 0, sweep: Math.PI }]);
     const rr = hole * Math.min(w, h);
     const bored = section([box(-w / 2, -h / 2, w / 2, h / 2), { kind: "circle", centre: { y: shift * (h - 2 * rr), z: 0 }, radius: rr, hole: true }]);
     const semicircle = section([{ kind: "sector", centre: { y: 0, z: 0 }, radius: r, startAngle: 0, sweep: Math.PI }]);
-    for (const s of [halfDisc, bored, semicircle]) {
+    // two materials (n = 1 + 9 hole, an invented timber-on-steel pair) with the bore in the upper one
+    const twoMaterials = section([
+      { ...box(-w / 2, -h / 2, w / 2, 0), material: { elasticModulus: 11e3 } },
+      { ...box(-w / 2, 0, w / 2, h / 2), material: { elasticModulus: 11e3 * (1 + 9 * hole) } },
+      { kind: "circle", centre: { y: h / 4 + shift * (h / 4 - rr / 2), z: 0 }, radius: rr / 2, hole: true },
+    ]);
+    for (const s of [halfDisc, bored, semicircle, twoMaterials]) {
       const v = -3e4;
       const peak = sectionPeakShearStress(v, s);
       checkAgainst(sectionOracle(s), peakRatio(peak.stress, v, sectionProperties(s).secondMomentZ));
