@@ -23,8 +23,11 @@ function frozenCopy<T>(value: T): T {
  *
  * Rules: polygons simple (either winding) with non-zero area; radii positive; every hole inside
  * the solid parts (checked at the hole's corners and edge midpoints); solid parts must not
- * overlap each other and holes must not overlap each other (not checked: overlapping parts are
- * counted twice); either every solid part has a material or none has. A hole without a material
+ * overlap each other (checked: parts whose bounding boxes overlap are tested by their exact
+ * common area, circular arcs taken as eight chords each; a solid part lying inside a hole may
+ * overlap the solid around that hole, since it fills part of the hole back); holes must not
+ * overlap each other (not checked: their common area is taken away twice); either every solid
+ * part has a material or none has. A hole without a material
  * takes the material of the solid it lies in.
  *
  * @param parts - The parts, solid and holes, in any order.
@@ -33,7 +36,7 @@ function frozenCopy<T>(value: T): T {
  *   `part-invalid`, `part-kind-unknown`, `point-invalid`, `not-a-number`, `not-finite`,
  *   `dimension-not-positive`, `polygon-degenerate`, `polygon-self-intersecting`,
  *   `sector-sweep-out-of-range`, `material-invalid`, `elastic-modulus-not-positive`,
- *   `yield-strength-not-positive`, `material-missing`, `hole-outside-solid`,
+ *   `yield-strength-not-positive`, `material-missing`, `hole-outside-solid`, `parts-overlap`,
  *   `section-area-not-positive`.
  * @example
  * ```ts

@@ -5,6 +5,7 @@ import { boundarySamples, containsPoint } from "./contain.js";
 import { ARC, STRIDE, pushPartBoundary } from "./edges.js";
 import { sinExact, cosExact } from "./angles.js";
 import { addMoments } from "./integrals.js";
+import { checkOverlaps } from "./overlap.js";
 import { validatePart } from "./validatePart.js";
 import { fillWeights, type Weights } from "./weights.js";
 import type { Section, SectionPart } from "./types.js";
@@ -238,6 +239,8 @@ function compile(section: Section, found: IssueCollector): PreparedSection | und
     addMoments(partMoments, edges, edgeStart[i]!, edgeStart[i + 1]!, 1, i * 6);
     netArea += sign[i]! * partMoments[i * 6]!;
   }
+
+  checkOverlaps(found, { count, edges, edgeStart, sign, partBox, partMoments }, tolerance);
   if (found.empty && !(netArea > 1e-12 * (box[1]! - box[0]!) * (box[3]! - box[2]!))) {
     found.add("section-area-not-positive", ["parts"], `The holes take away all of the area; they must not overlap or cover the solids.`, { area: netArea });
   }
