@@ -26,6 +26,9 @@ function extremes(k: number): Extremes {
 }
 
 const roots = new Float64Array(8);
+/** Per piece: the number of moment roots, and the roots themselves (grown as needed). */
+let momentRootCount = new Int32Array(64);
+let momentRoots = new Float64Array(192);
 const derivative = new Float64Array(2);
 
 /**
@@ -54,33 +57,30 @@ function scan(k: number, pp: PiecewisePolynomial, i: number, x0: number, x1: num
   see(k, evaluatePolynomial(c, o, d, h), x1);
 }
 
-const bernstein = new Float64Array(6);
-
 /**
  * True when the quintic `c[o] + ... + c[o+5] t^5` stays within diagram `k`'s running extremes
  * over 0 <= t <= h: its Bernstein coefficients on the piece bound it (the convex hull property;
  * Farouki & Rajan, "On the numerical condition of polynomials in Bernstein form", Computer Aided
- * Geometric Design 4 (1987)), so when they all lie within, no interior point can beat them.
+ * Geometric Design 4 (1987)), so when they all lie within, no interior point can beat them. The
+ * first and last Bernstein coefficients are the values at the piece's ends, already seen.
  */
 function withinRunning(k: number, c: Float64Array, o: number, h: number): boolean {
-  // scaled power coefficients a_j = c_j h^j / C(5, j), then b_i = sum_j C(i, j) a_j
-  let p = 1;
-  for (let j = 0; j <= 5; j++) {
-    bernstein[j] = ((c[o + j] as number) * p) / (BINOMIAL5[j] as number);
-    p *= h;
-  }
-  // de Casteljau-like accumulation: repeated forward sums turn a_j into b_i
-  for (let r = 1; r <= 5; r++) for (let j = 5; j >= r; j--) bernstein[j] = (bernstein[j] as number) + (bernstein[j - 1] as number);
+  // a_j = c_j h^j / C(5, j); b_i = sum over j <= i of C(i, j) a_j
+  const a0 = c[o] as number;
+  const a1 = (c[o + 1] as number) * h * 0.2;
+  const h2 = h * h;
+  const a2 = (c[o + 2] as number) * h2 * 0.1;
+  const a3 = (c[o + 3] as number) * h2 * h * 0.1;
+  const a4 = (c[o + 4] as number) * h2 * h2 * 0.2;
   const max = running[k] as number;
   const min = running[k + 2] as number;
-  for (let j = 0; j <= 5; j++) {
-    const v = bernstein[j] as number;
-    if (!(v <= max && v >= min)) return false;
-  }
-  return true;
+  const b1 = a0 + a1;
+  const b2 = a0 + 2 * a1 + a2;
+  const b3 = a0 + 3 * (a1 + a2) + a3;
+  const b4 = a0 + 4 * (a1 + a3) + 6 * a2 + a4;
+  return b1 <= max && b1 >= min && b2 <= max && b2 >= min && b3 <= max && b3 >= min && b4 <= max && b4 >= min;
 }
 
-const BINOMIAL5 = [1, 5, 10, 10, 5, 1];
 
 /** The peaks of the four diagrams and the points of contraflexure, in one pass over the pieces. */
 export interface PeaksAndContraflexure {
@@ -109,9 +109,13 @@ export function peaksOf(diagrams: Diagrams): PeaksAndContraflexure {
     running[k] = -Infinity;
     running[k + 2] = Infinity;
   }
-  // moment roots of every piece, kept for the contraflexure pass once the largest moment is known
-  const momentRoots: number[] = [];
-  const momentRootCount = new Int32Array(pieces);
+  // moment roots of every piece (at most three), kept for the contraflexure pass once the largest
+  // moment is known; working storage reused from call to call
+  if (momentRootCount.length < pieces) {
+    momentRootCount = new Int32Array(2 * pieces);
+    momentRoots = new Float64Array(6 * pieces);
+  }
+  let stored = 0;
   for (let i = 0; i < pieces; i++) {
     const x0 = b[i] as number;
     const x1 = b[i + 1] as number;
@@ -129,7 +133,7 @@ export function peaksOf(diagrams: Diagrams): PeaksAndContraflexure {
     // slope: at the roots of the moment (kept for contraflexure)
     count = pieceRoots(moment, i, h);
     momentRootCount[i] = count;
-    for (let k = 0; k < count; k++) momentRoots.push(roots[k] as number);
+    for (let k = 0; k < count; k++) momentRoots[stored++] = roots[k] as number;
     scan(8, slope, i, x0, x1, h, count);
     // deflection: its ends now; its interior (the roots of the slope, the costliest) in a second pass
     const yo = 6 * i;
@@ -141,7 +145,7 @@ export function peaksOf(diagrams: Diagrams): PeaksAndContraflexure {
     const x0 = b[i] as number;
     const x1 = b[i + 1] as number;
     const h = x1 - x0;
-    if (withinRunning(12, deflection.coefficients, 6 * i, h)) continue;
+    if (clearOfZero(slope.coefficients, 5 * i, 4, h) || withinRunning(12, deflection.coefficients, 6 * i, h)) continue;
     const count = pieceRoots(slope, i, h);
     scan(12, deflection, i, x0, x1, h, count);
   }
@@ -152,7 +156,7 @@ export function peaksOf(diagrams: Diagrams): PeaksAndContraflexure {
   };
 }
 
-function contraflexure(moment: PiecewisePolynomial, momentRoots: readonly number[], counts: Int32Array, scale: number): number[] {
+function contraflexure(moment: PiecewisePolynomial, momentRoots: Float64Array, counts: Int32Array, scale: number): number[] {
   const b = moment.breaks;
   const c = moment.coefficients;
   const zero = 1e-10 * scale;

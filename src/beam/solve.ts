@@ -59,7 +59,8 @@ export function solveBeam(beam: BeamInput, options?: SolveOptions): BeamSolution
       force += r.force;
       moment += r.force * r.at + r.moment;
     }
-    const warnings = [...conditioningWarnings(model, beam.supports, result.pivotRatio), ...balanceWarnings(model, result, beam.supports, scratch)];
+    const warnings = conditioningWarnings(model, beam.supports, result.pivotRatio);
+    for (const w of balanceWarnings(model, result, beam.supports, scratch)) warnings.push(w);
     return solution(beam.length, Object.freeze(reactions), diagrams, Object.freeze({ force, moment }), Object.freeze(warnings), Object.freeze(spansOf(beam.length, beam.supports)));
   } finally {
     releaseScratch(scratch);

@@ -66,8 +66,8 @@ export function solveStiffness(model: BeamModel, supports: readonly Support[], s
   fixedEndActions(model, fixed);
   const band = scratch.band;
   const rhs = scratch.rhs;
-  band.fill(0, 0, N * S);
-  rhs.fill(0, 0, N);
+  for (let i = 0; i < N * S; i++) band[i] = 0;
+  for (let i = 0; i < N; i++) rhs[i] = 0;
   for (let e = 0; e < elements; e++) {
     elementMatrices(model, fixed, e);
     const base = 2 * e;
@@ -85,8 +85,10 @@ export function solveStiffness(model: BeamModel, supports: readonly Support[], s
   // supports: springs on the diagonal, rigid restraints as prescribed values
   const prescribed = scratch.prescribed;
   const value = scratch.value;
-  prescribed.fill(0, 0, N);
-  value.fill(0, 0, N);
+  for (let i = 0; i < N; i++) {
+    value[i] = 0;
+    prescribed[i] = 0;
+  }
   for (let s = 0; s < supports.length; s++) {
     const sup = supports[s] as Support;
     const node = model.supportNode[s] as number;

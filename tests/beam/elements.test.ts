@@ -8,7 +8,7 @@ import { fc, test } from "@fast-check/vitest";
 import { solveBeam, type BeamInput } from "../../src/beam/index.js";
 import { nodeIndex } from "../../src/beam/model.js";
 import type { Load } from "../../src/loads/index.js";
-import { evaluatePiecewise } from "../../src/math/index.js";
+import { evaluatePiecewise, extremesOf } from "../../src/math/index.js";
 import { arbMember, samplePoints } from "./arbitraries.js";
 import { near } from "./helpers.js";
 
@@ -80,9 +80,9 @@ describe("results do not depend on breakpoints", () => {
       const a = solveBeam(beam);
       const b = solveBeam({ ...beam, loads: [...(beam.loads ?? []), ...extra] });
       const xs = samplePoints(beam.length);
+      // the scale of each diagram is its largest value anywhere (its peaks)
       for (const key of ["shear", "moment", "slope", "deflection"] as const) {
-        let scale = 1e-300;
-        for (const x of xs) scale = Math.max(scale, Math.abs(evaluatePiecewise(a[key], x)));
+        const scale = Math.max(Math.abs(a.peaks[key].max.value), Math.abs(a.peaks[key].min.value), 1e-300);
         for (const x of xs) expect(Math.abs(evaluatePiecewise(b[key], x) - evaluatePiecewise(a[key], x))).toBeLessThanOrEqual(1e-10 * scale);
       }
       for (let i = 0; i < a.reactions.length; i++) {
@@ -133,4 +133,23 @@ describe("nodeIndex (the breakpoint search)", () => {
     expect(nodeIndex(new Float64Array([0, 2]), 2, 1.5, 5)).toBe(1);
     expect(nodeIndex(new Float64Array([0, 2]), 2, 0.5, 0)).toBe(0);
   });
+});
+
+describe("the one-pass peaks", () => {
+  test.prop([arbMember({ settlements: true })], { numRuns: 100 })(
+    "equal extremesOf on each diagram, and each diagram takes its peak value where the peak is reported",
+    (beam) => {
+      const s = solveBeam(beam);
+      for (const key of ["shear", "moment", "slope", "deflection"] as const) {
+        const reference = extremesOf(s[key]);
+        const scale = Math.max(Math.abs(reference.max.value), Math.abs(reference.min.value), 1e-300);
+        for (const side of ["max", "min"] as const) {
+          const peak = s.peaks[key][side];
+          expect(Math.abs(peak.value - reference[side].value)).toBeLessThanOrEqual(1e-12 * scale);
+          const there = [evaluatePiecewise(s[key], peak.at, "left"), evaluatePiecewise(s[key], peak.at, "right")];
+          expect(Math.min(...there.map((v) => Math.abs(v - peak.value)))).toBeLessThanOrEqual(1e-9 * scale);
+        }
+      }
+    },
+  );
 });
