@@ -1,104 +1,41 @@
-// The width terms (see width-terms.ts) of a section from the section module, read from its parts:
-// straight edges give linear terms, circular arcs (circles, sectors, fillets are exact there, not
-// polygonised) give circular roots, one per quarter of the circle so each is monotone in y.
-import { cosExact, sinExact } from "../section/angles.js";
+// The width terms (see width-terms.ts) of a section from the section module, read from the
+// section module's own boundary edges of each part: straight edges give linear terms, circular
+// arcs (circles, sectors, fillets are exact there, not polygonised; the edge list already splits
+// them at quarter turns, so each is monotone in y) give circular roots.
+import { sinExact } from "../section/angles.js";
+import { ARC, pushPartBoundary, STRIDE } from "../section/edges.js";
 import type { Section, SectionPart } from "../section/index.js";
 import type { WidthTerm } from "./width-terms.js";
 
-const QUARTER = Math.PI / 2;
+const edges: number[] = [];
 
-/** sin and cos, exact at multiples of a quarter turn (as the section module places its parts). */
-function unit(angle: number): { s: number; c: number } {
-  return { s: sinExact(angle), c: cosExact(angle) };
-}
-
-/** Where one part's terms go; `sign` is +1 for a solid, -1 for a hole (times the winding). */
-interface Sink {
-  readonly out: WidthTerm[];
-  readonly cy: number;
-  readonly sign: number;
-  readonly ratio: number;
-}
-
-/** A straight boundary edge from (z0, y0) to (z1, y1), absolute coordinates. */
-function line(sink: Sink, z0: number, y0: number, z1: number, y1: number): void {
-  if (y0 === y1) return;
-  const dir = y1 > y0 ? sink.sign : -sink.sign;
-  const slope = (z1 - z0) / (y1 - y0);
-  const lo = Math.min(y0, y1) - sink.cy;
-  const hi = Math.max(y0, y1) - sink.cy;
-  sink.out.push({ lo, hi, c0: dir * (z0 + slope * (sink.cy - y0)), c1: dir * slope, k: 0, centre: 0, radius: 0, ratio: sink.ratio });
-}
-
-/** A boundary arc about (zc, yc) from angle `from` to `to` (either direction), split at quarter turns. */
-function arc(sink: Sink, zc: number, yc: number, r: number, from: number, to: number): void {
-  const step = to > from ? 1 : -1;
-  let a = from;
-  for (let guard = 0; guard < 12 && a !== to; guard++) {
-    const k = step > 0 ? Math.floor(a / QUARTER + 1e-12) + 1 : Math.ceil(a / QUARTER - 1e-12) - 1;
-    const next = step > 0 ? Math.min(k * QUARTER, to) : Math.max(k * QUARTER, to);
-    const y0 = yc + r * unit(a).s;
-    const y1 = yc + r * unit(next).s;
-    if (y0 !== y1) {
-      const dir = y1 > y0 ? sink.sign : -sink.sign;
-      const side = Math.cos((a + next) / 2) > 0 ? 1 : -1;
-      const lo = Math.min(y0, y1) - sink.cy;
-      const hi = Math.max(y0, y1) - sink.cy;
-      sink.out.push({ lo, hi, c0: dir * zc, c1: 0, k: dir * side, centre: yc - sink.cy, radius: r, ratio: sink.ratio });
-    }
-    a = next;
-  }
-}
-
-function polygonTerms(sink: Sink, points: readonly { readonly y: number; readonly z: number }[]): void {
-  let twice = 0;
-  const n = points.length;
-  for (let i = 0, j = n - 1; i < n; j = i++) twice += (points[j] as { z: number }).z * (points[i] as { y: number }).y - (points[i] as { z: number }).z * (points[j] as { y: number }).y;
-  const wound: Sink = { ...sink, sign: twice < 0 ? -sink.sign : sink.sign };
-  for (let i = 0, j = n - 1; i < n; j = i++) {
-    const p = points[j] as { y: number; z: number };
-    const q = points[i] as { y: number; z: number };
-    line(wound, p.z, p.y, q.z, q.y);
-  }
-}
-
-function partTerms(sink: Sink, part: SectionPart): void {
-  switch (part.kind) {
-    case "polygon":
-      polygonTerms(sink, part.points);
-      return;
-    case "circle":
-      arc(sink, part.centre.z, part.centre.y, part.radius, -QUARTER, 3 * QUARTER);
-      return;
-    case "sector": {
-      const { z, y } = part.centre;
-      const r = part.radius;
-      const a0 = part.startAngle;
-      const a1 = a0 + part.sweep;
-      if (part.sweep >= 2 * Math.PI) {
-        arc(sink, z, y, r, a0, a1);
-        return;
-      }
-      const u0 = unit(a0);
-      const u1 = unit(a1);
-      line(sink, z, y, z + r * u0.c, y + r * u0.s);
-      arc(sink, z, y, r, a0, a1);
-      line(sink, z + r * u1.c, y + r * u1.s, z, y);
-      return;
-    }
-    case "fillet": {
-      const { z, y } = part.corner;
-      const r = part.radius;
-      const t = part.orientation;
-      const { c, s } = unit(t);
-      line(sink, z, y, z + r * c, y + r * s);
-      arc(sink, z + r * (c - s), y + r * (s + c), r, t + 3 * QUARTER, t + 2 * QUARTER);
-      line(sink, z - r * s, y + r * c, z, y);
-      return;
-    }
-    default: {
-      const never: never = part;
-      return never;
+/**
+ * Appends the width terms of one part: its counterclockwise boundary edges, each with direction
+ * +1 going up and -1 going down, times `sign` (+1 solid, -1 hole); y from `cy`.
+ */
+function partTerms(out: WidthTerm[], part: SectionPart, cy: number, sign: number, ratio: number): void {
+  edges.length = 0;
+  pushPartBoundary(edges, part);
+  for (let e = 0; e < edges.length; e += STRIDE) {
+    const a = edges[e + 1] as number;
+    const b = edges[e + 2] as number;
+    const c = edges[e + 3] as number;
+    const d = edges[e + 4] as number;
+    if (edges[e] === ARC) {
+      // centre (a, b), radius c, from angle d to angle edges[e + 5]
+      const to = edges[e + 5] as number;
+      const y0 = b + c * sinExact(d);
+      const y1 = b + c * sinExact(to);
+      if (y0 === y1) continue;
+      const dir = y1 > y0 ? sign : -sign;
+      const side = Math.cos((d + to) / 2) > 0 ? 1 : -1;
+      out.push({ lo: Math.min(y0, y1) - cy, hi: Math.max(y0, y1) - cy, c0: dir * a, c1: 0, k: dir * side, centre: b - cy, radius: c, ratio });
+    } else {
+      // from (a, b) to (c, d)
+      if (b === d) continue;
+      const dir = d > b ? sign : -sign;
+      const slope = (c - a) / (d - b);
+      out.push({ lo: Math.min(b, d) - cy, hi: Math.max(b, d) - cy, c0: dir * (a + slope * (cy - b)), c1: dir * slope, k: 0, centre: 0, radius: 0, ratio });
     }
   }
 }
@@ -110,7 +47,7 @@ function partTerms(sink: Sink, part: SectionPart): void {
 export function sectionWidthTerms(section: Section, centroidY: number, ratios: readonly number[]): WidthTerm[] {
   const out: WidthTerm[] = [];
   section.parts.forEach((part, i) => {
-    partTerms({ out, cy: centroidY, sign: part.hole === true ? -1 : 1, ratio: ratios[i] ?? 1 }, part);
+    partTerms(out, part, centroidY, part.hole === true ? -1 : 1, ratios[i] ?? 1);
   });
   return out;
 }
