@@ -121,8 +121,8 @@ export function validateBeam(beam: unknown, options: SolveOptions | undefined): 
  * on?): ask for it to be placed to one side.
  */
 function checkHingeNeighbours(beam: BeamInput, found: IssueCollector): void {
-  const hinges = [...(beam.hinges ?? [])].sort((a, b) => a - b);
-  if (hinges.length === 0) return;
+  if (beam.hinges === undefined || beam.hinges.length === 0) return;
+  const hinges = [...beam.hinges].sort((a, b) => a - b);
   const tol = SAME_POINT * beam.length;
   const atHinge = (x: number): boolean => {
     let lo = 0;
