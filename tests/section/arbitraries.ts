@@ -49,3 +49,17 @@ export const anyPart = (spread = 100): fc.Arbitrary<SectionPart> => fc.oneof(sta
 export function near(actual: number, expected: number, scale: number, rel = 1e-9): boolean {
   return Math.abs(actual - expected) <= rel * Math.max(Math.abs(expected), scale);
 }
+
+/** A rectangle from (z0, y0) to (z1, y1) as a polygon part, solid or a hole (test fixtures). */
+export function boxPart(z0: number, y0: number, z1: number, y1: number, hole = false): SectionPart {
+  return {
+    kind: "polygon",
+    points: [
+      { y: y0, z: z0 },
+      { y: y0, z: z1 },
+      { y: y1, z: z1 },
+      { y: y1, z: z0 },
+    ],
+    ...(hole ? { hole: true } : {}),
+  };
+}

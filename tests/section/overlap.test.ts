@@ -2,17 +2,9 @@ import { describe, expect, it } from "vitest";
 import { fc, test } from "@fast-check/vitest";
 import { isFlexuraError } from "../../src/errors/index.js";
 import { rectangularHollow, section, sectionProperties, trySection, type SectionPart } from "../../src/section/index.js";
+import { boxPart } from "./arbitraries.js";
 
-const rect = (z0: number, y0: number, z1: number, y1: number, hole = false): SectionPart => ({
-  kind: "polygon",
-  points: [
-    { y: y0, z: z0 },
-    { y: y0, z: z1 },
-    { y: y1, z: z1 },
-    { y: y1, z: z0 },
-  ],
-  ...(hole ? { hole: true } : {}),
-});
+const rect = boxPart;
 
 /** The overlap issue of section(parts), or undefined when the section is accepted. */
 function overlapIssue(parts: readonly SectionPart[]): { path: readonly (string | number)[]; parts: unknown; area: number } | undefined {

@@ -10,21 +10,13 @@ import {
   tee,
   channel,
   type Section,
-  type SectionPart,
 } from "../../src/section/index.js";
 import { peakShearStress, sectionPeakShearStress, sectionShearStressProfile, shearStressProfile, type DepthBand } from "../../src/stress/index.js";
+import { boxPart } from "../section/arbitraries.js";
 import { bandOracle, denseRatios, goldenPeak, sectionOracle, type OracleSource } from "./golden-oracle.js";
 
 const rect = (b: number, h: number): DepthBand[] => [{ kind: "trapezoid", yBottom: -h / 2, yTop: h / 2, widthBottom: b, widthTop: b }];
-const box = (z0: number, y0: number, z1: number, y1: number): SectionPart => ({
-  kind: "polygon",
-  points: [
-    { y: y0, z: z0 },
-    { y: y0, z: z1 },
-    { y: y1, z: z1 },
-    { y: y1, z: z0 },
-  ],
-});
+const box = boxPart;
 
 describe("peak shear stress from roots: published values", () => {
   it("peakShearStress(rectangle) and sectionPeakShearStress(rectangle) = 1.5 V / A, at the neutral axis", () => {
