@@ -1,4 +1,7 @@
+import { carryAcrossPiece } from "./carry.js";
 import type { BeamModel } from "./model.js";
+
+const state = new Float64Array(4);
 
 /**
  * The fixed-end actions of every element: the forces its two clamped ends take from all the
@@ -20,23 +23,12 @@ export function fixedEndActions(model: BeamModel, out: Float64Array): void {
     const first = joint[e] as number;
     const last = joint[e + 1] as number;
     // state at the running point: shear, moment, E I times slope, E I times deflection
-    let v = 0;
-    let m = 0;
-    let t = 0;
-    let d = 0;
-    for (let i = first; i < last; i++) {
-      const h = (x[i + 1] as number) - (x[i] as number);
-      const a0 = model.wLeft[i] as number;
-      const dw = (model.wRight[i] as number) - a0; // a1 * h, for w = a0 + a1 s
-      d += h * (t + h * (m / 2 + h * (v / 6 - h * (a0 / 24 + dw / 120))));
-      t += h * (m + h * (v / 2 - h * (a0 / 6 + dw / 24)));
-      m += h * (v - h * (a0 / 2 + dw / 6));
-      v -= h * (a0 + dw / 2);
-      if (i + 1 < last) {
-        v -= model.force[i + 1] as number;
-        m -= model.couple[i + 1] as number;
-      }
-    }
+    state.fill(0);
+    for (let i = first; i < last; i++) carryAcrossPiece(state, model, i, 1, last);
+    const v = state[0] as number;
+    const m = state[1] as number;
+    const t = state[2] as number;
+    const d = state[3] as number;
     const h = (x[last] as number) - (x[first] as number);
     // Q h^3/6 - M h^2/2 = -d and Q h^2/2 - M h = -t (E I cancels)
     const q = (12 * d) / (h * h * h) - (6 * t) / (h * h);

@@ -1,6 +1,7 @@
 import { makePiecewise } from "../math/piecewise.js";
 import type { PiecewisePolynomial } from "../math/index.js";
 import { restrainsDeflection, restrainsRotation, type Support } from "../supports/index.js";
+import { carryAcrossPiece } from "./carry.js";
 import type { BeamModel } from "./model.js";
 import type { StiffnessResult } from "./stiffness.js";
 import type { Reaction } from "./types.js";
@@ -12,6 +13,9 @@ export interface Diagrams {
   readonly slope: PiecewisePolynomial;
   readonly deflection: PiecewisePolynomial;
 }
+
+/** The running state [shear, moment, slope, deflection] carried along an element. */
+const state = new Float64Array(4);
 
 /**
  * Exact recovery on each piece, carried across each element from its left-end state (deflection
@@ -38,15 +42,18 @@ export function recoverDiagrams(model: BeamModel, result: StiffnessResult): Diag
     const first = model.joint[e] as number;
     const last = model.joint[e + 1] as number;
     const ei = model.ei[e] as number;
-    let v = q[4 * e] as number;
-    let m = -(q[4 * e + 1] as number);
-    let r = d[2 * e + 1] as number;
-    let y = d[2 * e] as number;
+    state[0] = q[4 * e] as number;
+    state[1] = -(q[4 * e + 1] as number);
+    state[2] = d[2 * e + 1] as number;
+    state[3] = d[2 * e] as number;
     for (let i = first; i < last; i++) {
+      const v = state[0];
+      const m = state[1];
+      const r = state[2];
+      const y = state[3];
       const h = (x[i + 1] as number) - (x[i] as number);
       const a0 = model.wLeft[i] as number;
-      const dw = (model.wRight[i] as number) - a0;
-      const a1 = dw / h;
+      const a1 = ((model.wRight[i] as number) - a0) / h;
       let o = 3 * i;
       shear[o] = v;
       shear[o + 1] = -a0;
@@ -69,12 +76,7 @@ export function recoverDiagrams(model: BeamModel, result: StiffnessResult): Diag
       deflection[o + 3] = v / (6 * ei);
       deflection[o + 4] = -a0 / (24 * ei);
       deflection[o + 5] = -a1 / (120 * ei);
-      if (i + 1 === last) break;
-      // carry the state to the next breakpoint (the same sums as evaluating the four polynomials at h)
-      y += h * (r + (h * (m / 2 + h * (v / 6 - h * (a0 / 24 + dw / 120)))) / ei);
-      r += (h * (m + h * (v / 2 - h * (a0 / 6 + dw / 24)))) / ei;
-      m += h * (v - h * (a0 / 2 + dw / 6)) - (model.couple[i + 1] as number);
-      v -= h * (a0 + dw / 2) + (model.force[i + 1] as number);
+      if (i + 1 < last) carryAcrossPiece(state, model, i, 1 / ei, last);
     }
   }
   return {
