@@ -3,26 +3,8 @@ import { fc, test } from "@fast-check/vitest";
 import { formatPath, isFlexuraError } from "../../src/errors/index.js";
 import { modelToJson, parseModel, tryParseModel } from "../../src/model/index.js";
 import { structurallyValidModel } from "./arbitraries.js";
-import { physicalMember, writeMember, writeMemberWithUnits } from "./sound-models.js";
+import { physicalMember, specExample, writeMember, writeMemberWithUnits } from "./sound-models.js";
 
-const specExample = {
-  units: { length: "m", force: "kN", deflection: "mm", stress: "MPa" },
-  length: 9,
-  E: "200 GPa",
-  I: "120000000 mm^4",
-  supports: [
-    { at: 0, type: "pin" },
-    { at: 4, type: "spring", stiffness: "5000 kN/m" },
-    { at: 7.5, type: "roller", settlement: "5 mm" },
-  ],
-  hinges: [],
-  loads: [
-    { type: "point", at: 2, value: 18, case: "dead" },
-    { type: "moment", at: 9, value: 4 },
-    { type: "distributed", from: 0, to: 9, start: 3, end: 5, case: "live" },
-  ],
-  limits: { deflection: "span/360", bendingStress: "165 MPa", shearStress: "95 MPa" },
-};
 
 function deepFreeze<T>(value: T): T {
   if (typeof value === "object" && value !== null) {

@@ -6,6 +6,7 @@ import { Ajv2020 } from "ajv/dist/2020.js";
 import { modelSchema } from "../../src/model/schema.js";
 import { structuralIssues } from "../../src/model/validate.js";
 import { possiblyInvalidModel, structurallyValidModel } from "./arbitraries.js";
+import { specExample } from "./sound-models.js";
 
 // A general-purpose JSON Schema validator (ajv 8, draft 2020-12) is the outside reference for
 // what the published schema means. strictRequired is off: the schema names required fields inside
@@ -24,26 +25,8 @@ describe("modelSchema", () => {
   });
 
   it("accepts the example model of the format's specification", () => {
-    const example = {
-      units: { length: "m", force: "kN", deflection: "mm", stress: "MPa" },
-      length: 9,
-      E: "200 GPa",
-      I: "120000000 mm^4",
-      supports: [
-        { at: 0, type: "pin" },
-        { at: 4, type: "spring", stiffness: "5000 kN/m" },
-        { at: 7.5, type: "roller", settlement: "5 mm" },
-      ],
-      hinges: [],
-      loads: [
-        { type: "point", at: 2, value: 18, case: "dead" },
-        { type: "moment", at: 9, value: 4 },
-        { type: "distributed", from: 0, to: 9, start: 3, end: 5, case: "live" },
-      ],
-      limits: { deflection: "span/360", bendingStress: "165 MPa", shearStress: "95 MPa" },
-    };
-    expect(ajvValidate(example)).toBe(true);
-    expect(structuralIssues(example)).toEqual([]);
+    expect(ajvValidate(specExample)).toBe(true);
+    expect(structuralIssues(specExample)).toEqual([]);
   });
 });
 

@@ -88,3 +88,23 @@ export function writeMemberWithUnits(member: PhysicalMember): Record<string, unk
     ),
   };
 }
+
+/** The example model of the format's specification (docs/model-format.md), as a plain object. */
+export const specExample = {
+  units: { length: "m", force: "kN", deflection: "mm", stress: "MPa" },
+  length: 9,
+  E: "200 GPa",
+  I: "120000000 mm^4",
+  supports: [
+    { at: 0, type: "pin" },
+    { at: 4, type: "spring", stiffness: "5000 kN/m" },
+    { at: 7.5, type: "roller", settlement: "5 mm" },
+  ],
+  hinges: [],
+  loads: [
+    { type: "point", at: 2, value: 18, case: "dead" },
+    { type: "moment", at: 9, value: 4 },
+    { type: "distributed", from: 0, to: 9, start: 3, end: 5, case: "live" },
+  ],
+  limits: { deflection: "span/360", bendingStress: "165 MPa", shearStress: "95 MPa" },
+};

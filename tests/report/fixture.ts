@@ -6,24 +6,10 @@
 // Member: L = 6 m, w = 10 kN/m, E = 200 GPa, rectangle 100 mm x 300 mm (I = bd^3/12 = 225e6 mm^4),
 // so EI = 45 000 kN*m^2, max M = 45 kN*m, max deflection 3.75 mm, extreme stress M c / I = 30 MPa.
 import { solveBeam } from "../../src/beam/index.js";
-import type { Model, ModelAnalysis, ModelUnits } from "../../src/model/index.js";
+import { DEFAULT_MODEL_UNITS, type Model, type ModelAnalysis, type ModelUnits } from "../../src/model/index.js";
 
-export const UNITS: ModelUnits = {
-  length: "m",
-  force: "kN",
-  moment: "kN*m",
-  forcePerLength: "kN/m",
-  deflection: "mm",
-  rotation: "rad",
-  stress: "MPa",
-  modulus: "MPa",
-  sectionLength: "mm",
-  area: "mm^2",
-  secondMoment: "mm^4",
-  sectionModulus: "mm^3",
-  translationalStiffness: "kN/m",
-  rotationalStiffness: "kN*m/rad",
-};
+/** The report fixtures use the model format's default units. */
+export const UNITS: ModelUnits = DEFAULT_MODEL_UNITS;
 
 const L = 6;
 const w = 10;
