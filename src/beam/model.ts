@@ -1,5 +1,5 @@
 import { DEFAULT_LOAD_CASE, type Load } from "../loads/index.js";
-import { ensureNodes, ensureRaw, takeOutput, type Scratch } from "./scratch.js";
+import { ensureNodes, ensureRaw, type Scratch } from "./scratch.js";
 import type { BeamInput, SolveOptions } from "./types.js";
 import { SAME_POINT } from "./validate.js";
 
@@ -14,19 +14,15 @@ import { SAME_POINT } from "./validate.js";
  * fixed-end actions. The stiffness system is as small as the structure allows, however many
  * loads there are, and no load makes a short, stiff element.
  *
- * Apart from `x` and `output`, the arrays are working storage that may be longer than needed
- * (index them; never read their length).
+ * Every array is working storage from the solve's {@link Scratch} that may be longer than needed
+ * (index them; never read their length). None of them ends up in a result: the results copy what
+ * they keep into storage of their own (see `recover.ts`).
  */
 export interface BeamModel {
   /** Number of breakpoints (pieces + 1). */
   readonly nodes: number;
-  /** Breakpoints, increasing; first 0, last the length. */
+  /** Breakpoints, increasing; first 0, last the length (working storage: index it). */
   readonly x: Float64Array;
-  /**
-   * Storage for the results, allocated once per solve: `x` (the breakpoints) at its start, then
-   * the coefficients of shear, moment, slope and deflection, 3, 4, 5 and 6 per piece.
-   */
-  readonly output: Float64Array;
   /** Downward load intensity at the left and right end of each piece. */
   readonly wLeft: Float64Array;
   readonly wRight: Float64Array;
@@ -192,11 +188,8 @@ export function buildModel(beam: BeamInput, options: SolveOptions | undefined, s
   const hinges = beam.hinges ?? [];
   const steps = typeof beam.stiffness === "number" ? [] : beam.stiffness;
   const n = breakpoints(beam, loads, scratch);
-  const pieces = n - 1;
-  const output = takeOutput(n + 18 * pieces);
-  const raw = scratch.raw;
-  for (let i = 0; i < n; i++) output[i] = raw[i] as number;
-  const x = output.subarray(0, n);
+  // the sorted, merged breakpoints stay in the scratch (the results copy them)
+  const x = scratch.raw;
   ensureNodes(scratch, n, beam.supports.length);
 
   // structural nodes: mark them (2 = a hinge), then list them in order
@@ -269,5 +262,5 @@ export function buildModel(beam: BeamInput, options: SolveOptions | undefined, s
     hint = nodeIndex(x, n, (beam.supports[i] as { at: number }).at, hint);
     supportNode[i] = jointOf[hint] as number;
   }
-  return { nodes: n, x, output, wLeft, wRight, force, couple, joints: m, joint, ei, released, supportNode, loads };
+  return { nodes: n, x, wLeft, wRight, force, couple, joints: m, joint, ei, released, supportNode, loads };
 }

@@ -22,7 +22,11 @@ function see(k: number, value: number, x: number): void {
 }
 
 function extremes(k: number): Extremes {
-  return { max: { value: running[k] as number, at: running[k + 1] as number }, min: { value: running[k + 2] as number, at: running[k + 3] as number } };
+  // frozen all the way down: a peak's value cannot be written
+  return Object.freeze({
+    max: Object.freeze({ value: running[k] as number, at: running[k + 1] as number }),
+    min: Object.freeze({ value: running[k + 2] as number, at: running[k + 3] as number }),
+  });
 }
 
 const roots = new Float64Array(8);

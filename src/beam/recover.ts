@@ -28,13 +28,19 @@ const state = new Float64Array(4);
  * couple C (counterclockwise) lowers the moment by C.
  */
 export function recoverDiagrams(model: BeamModel, result: StiffnessResult): Diagrams {
-  const pieces = model.nodes - 1;
-  // one allocation for all four (made by buildModel), after the breakpoints
-  let at = model.nodes;
-  const shear = model.output.subarray(at, (at += pieces * 3));
-  const moment = model.output.subarray(at, (at += pieces * 4));
-  const slope = model.output.subarray(at, (at += pieces * 5));
-  const deflection = model.output.subarray(at, at + pieces * 6);
+  const n = model.nodes;
+  const pieces = n - 1;
+  // each diagram owns one ArrayBuffer, exactly its breakpoints then its coefficients: nothing is
+  // shared with another diagram, another result or the solver, so a diagram survives
+  // structuredClone at its own size and its buffer can be transferred without touching anything else
+  const shearBreaks = ownBreaks(model.x, n, 3 * pieces);
+  const momentBreaks = ownBreaks(model.x, n, 4 * pieces);
+  const slopeBreaks = ownBreaks(model.x, n, 5 * pieces);
+  const deflectionBreaks = ownBreaks(model.x, n, 6 * pieces);
+  const shear = coefficientsAfter(shearBreaks, 3 * pieces);
+  const moment = coefficientsAfter(momentBreaks, 4 * pieces);
+  const slope = coefficientsAfter(slopeBreaks, 5 * pieces);
+  const deflection = coefficientsAfter(deflectionBreaks, 6 * pieces);
   const d = result.displacements;
   const q = result.endForces;
   const x = model.x;
@@ -80,11 +86,24 @@ export function recoverDiagrams(model: BeamModel, result: StiffnessResult): Diag
     }
   }
   return {
-    shear: makePiecewise(x, shear, 2),
-    moment: makePiecewise(x, moment, 3),
-    slope: makePiecewise(x, slope, 4),
-    deflection: makePiecewise(x, deflection, 5),
+    shear: makePiecewise(shearBreaks, shear, 2),
+    moment: makePiecewise(momentBreaks, moment, 3),
+    slope: makePiecewise(slopeBreaks, slope, 4),
+    deflection: makePiecewise(deflectionBreaks, deflection, 5),
   };
+}
+
+/** A new buffer of `n + size` doubles holding a copy of the breakpoints `x[0 .. n - 1]`; returns the view of the breakpoints. */
+function ownBreaks(x: Float64Array, n: number, size: number): Float64Array {
+  const buffer = new ArrayBuffer(8 * (n + size));
+  const breaks = new Float64Array(buffer, 0, n);
+  for (let i = 0; i < n; i++) breaks[i] = x[i] as number;
+  return breaks;
+}
+
+/** The `size` doubles of the buffer that follow `breaks`. */
+function coefficientsAfter(breaks: Float64Array, size: number): Float64Array {
+  return new Float64Array(breaks.buffer, breaks.byteLength, size);
 }
 
 /** Reactions from equilibrium of each support's structural node: its load plus the forces the elements take from it. */

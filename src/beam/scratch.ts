@@ -114,26 +114,3 @@ export function ensureNodes(s: Scratch, nodes: number, supports: number): void {
   }
   if (s.supportNode.length < supports) s.supportNode = new Int32Array(capacity(s.supportNode.length, supports));
 }
-
-/**
- * Result storage for small members is carved from shared blocks, as Node carves small Buffers
- * from a pool: allocating a typed array costs far more than filling it (about a microsecond, most
- * of it in the garbage collector), so small results share a block of POOL doubles. Each result
- * owns its own stretch and nothing writes to a stretch once handed out; a block lives while any
- * result cut from it does. A result larger than a quarter of a block gets storage of its own.
- */
-const POOL = 2048;
-let pool = new Float64Array(POOL);
-let poolUsed = 0;
-
-/** Storage for `size` result numbers: a fresh stretch of a shared block, or a new array when large. */
-export function takeOutput(size: number): Float64Array {
-  if (size > POOL / 4) return new Float64Array(size);
-  if (poolUsed + size > POOL) {
-    pool = new Float64Array(POOL);
-    poolUsed = 0;
-  }
-  const out = pool.subarray(poolUsed, poolUsed + size);
-  poolUsed += size;
-  return out;
-}

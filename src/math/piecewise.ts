@@ -7,9 +7,9 @@ import { evaluatePolynomial } from "./polynomial.js";
  * full precision far from x = 0).
  *
  * Treat it as immutable: flexura never changes one after building it, and the typed arrays
- * must not be written to by callers either. The arrays of a solved member may be views into a
- * larger buffer shared with other results (as Node pools small Buffers): take a `.slice()` for
- * a copy of your own, for example before transferring its buffer to a worker.
+ * must not be written to by callers either. Each diagram of a solved member owns one ArrayBuffer
+ * holding exactly its breakpoints and coefficients, shared with nothing else: it survives
+ * `structuredClone` at its own size, and transferring it moves that diagram alone.
  *
  * @example
  * ```ts
