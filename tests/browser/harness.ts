@@ -8,9 +8,11 @@ import { chromium, type Browser } from "playwright-core";
 /** The repository root (tests/browser/..). */
 export const ROOT = resolve(import.meta.dirname, "..", "..");
 
-const CANDIDATES = [process.env.FLEXURA_CHROMIUM, "/usr/bin/chromium", "/usr/bin/chromium-browser"].filter(
-  (p): p is string => typeof p === "string" && p !== "",
-);
+/** `FLEXURA_CHROMIUM` names the binary when set (and only it is tried); otherwise Debian's paths. */
+const CANDIDATES =
+  process.env.FLEXURA_CHROMIUM !== undefined && process.env.FLEXURA_CHROMIUM !== ""
+    ? [process.env.FLEXURA_CHROMIUM]
+    : ["/usr/bin/chromium", "/usr/bin/chromium-browser"];
 
 /** Path of the Chromium binary, or undefined when none is installed. */
 export const chromiumPath: string | undefined = CANDIDATES.find((p) => existsSync(p));
