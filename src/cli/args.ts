@@ -1,5 +1,5 @@
 import { parseArgs } from "node:util";
-import { closestName } from "../model/closest.js";
+import { closestName } from "../errors/index.js";
 
 /** A command line, understood. */
 export type CliCommand =
