@@ -12,7 +12,19 @@ function distance(a: string, b: string): number {
   return previous[b.length] ?? 0;
 }
 
-/** The candidate closest to `name` (ignoring case), if it is close enough to be a likely typo. */
+/**
+ * The candidate closest to `name` (ignoring case) by edit distance, when it is close enough to be
+ * a likely typo (at most a third of the name's letters, and at least one, differ); for "Did you
+ * mean" hints on unknown fields and options.
+ *
+ * @param name - What was written.
+ * @param candidates - The names allowed there.
+ * @returns The likely intended name, or undefined when none is close.
+ * @example
+ * ```ts
+ * closestName("bendingstress", ["bendingStress", "shearStress"]); // "bendingStress"
+ * ```
+ */
 export function closestName(name: string, candidates: readonly string[]): string | undefined {
   let best: string | undefined;
   let bestDistance = Infinity;
