@@ -13,27 +13,41 @@ function distance(a: string, b: string): number {
 }
 
 /**
- * The candidate closest to `name` (ignoring case) by edit distance, when it is close enough to be
- * a likely typo (at most a third of the name's letters, and at least one, differ); for "Did you
- * mean" hints on unknown fields and options.
+ * The candidate closest to `name` (letter case aside) by edit distance, when it is close enough to
+ * be a likely misspelling (at most a third of the name's letters differ, and at least one may);
+ * otherwise undefined.
  *
- * @param name - What was written.
- * @param candidates - The names allowed there.
- * @returns The likely intended name, or undefined when none is close.
  * @example
  * ```ts
- * closestName("bendingstress", ["bendingStress", "shearStress"]); // "bendingStress"
+ * closestName("rootradius", ["depth", "rootRadius"]); // "rootRadius"
+ * closestName("colour", ["depth", "width"]); // undefined
  * ```
  */
 export function closestName(name: string, candidates: readonly string[]): string | undefined {
   let best: string | undefined;
   let bestDistance = Infinity;
+  const lower = name.slice(0, 64).toLowerCase();
   for (const candidate of candidates) {
-    const d = distance(name.toLowerCase(), candidate.toLowerCase());
+    const d = distance(lower, candidate.toLowerCase());
     if (d < bestDistance) {
       best = candidate;
       bestDistance = d;
     }
   }
   return bestDistance <= Math.max(1, Math.floor(name.length / 3)) ? best : undefined;
+}
+
+/**
+ * The message tail for an unknown key: ` Did you mean "x"?` when one of the known names is close,
+ * else a list of the known names.
+ *
+ * @example
+ * ```ts
+ * unknownKeyHint("rootradius", ["depth", "rootRadius"]); // ' Did you mean "rootRadius"?'
+ * ```
+ */
+export function unknownKeyHint(name: string, known: readonly string[]): string {
+  const near = closestName(name, known);
+  if (near !== undefined) return ` Did you mean "${near}"?`;
+  return ` Known names: ${known.map((k) => `"${k}"`).join(", ")}.`;
 }

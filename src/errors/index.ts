@@ -5,4 +5,4 @@ export type { Result } from "./result.js";
 export { attempt } from "./result.js";
 export { IssueCollector } from "./collector.js";
 export { requireFinite, describeValue } from "./finite.js";
-export { closestName } from "./closest.js";
+export { closestName, unknownKeyHint } from "./closest.js";
