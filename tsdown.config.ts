@@ -12,6 +12,26 @@ export const entries = {
   check: "src/check/index.ts",
 } as const;
 
+/**
+ * The command shares the package's own built entries instead of bundling a second copy of the library:
+ * its imports of the model, report and errors modules become imports of `flexura/model`, `flexura/report`
+ * and `flexura`, which Node resolves to this package's dist/ files (a package may import itself by name).
+ */
+const SHARED_WITH_CLI: Readonly<Record<string, string>> = {
+  "../model/index.js": "flexura/model",
+  "../report/index.js": "flexura/report",
+  "../errors/index.js": "flexura",
+};
+
+const shareLibraryWithCli = {
+  name: "flexura-share-library-with-cli",
+  resolveId(source: string, importer: string | undefined) {
+    if (importer === undefined || !/[\\/]src[\\/]cli[\\/]/.test(importer)) return null;
+    const id = Object.hasOwn(SHARED_WITH_CLI, source) ? SHARED_WITH_CLI[source] : undefined;
+    return id === undefined ? null : { id, external: true };
+  },
+};
+
 export default defineConfig([
   {
     entry: entries,
@@ -34,6 +54,7 @@ export default defineConfig([
     platform: "node",
     target: "node20",
     outDir: "dist",
-    external: ["decimal.js"],
+    external: ["decimal.js", "flexura", "flexura/model", "flexura/report"],
+    plugins: [shareLibraryWithCli],
   },
 ]);

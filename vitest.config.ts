@@ -3,6 +3,7 @@ import { defineConfig } from "vitest/config";
 export default defineConfig({
   test: {
     include: ["tests/**/*.test.ts"],
+    exclude: ["tests/browser/**", "node_modules/**"],
     setupFiles: ["tests/setup.ts"],
     coverage: {
       provider: "v8",

@@ -19,6 +19,5 @@ if (bad.length > 0) {
 console.log(`pack-check: ${info.files.length} files, ${(info.size / 1024).toFixed(1)} KiB packed`);
 const bin = (name) => join(root, "node_modules", ".bin", name);
 execFileSync(bin("publint"), ["run", tarball, "--strict"], { stdio: "inherit" });
-// Subpath entries (flexura/model, ...) need `exports`, which TypeScript's legacy node10 resolution ignores;
-// engines >= 20 and every current moduleResolution read `exports`, so check the node16 profile.
-execFileSync(bin("attw"), [tarball, "--profile", "node16"], { stdio: "inherit" });
+// Every resolution: node10 (legacy, through `typesVersions` for the subpaths), node16 ESM and CJS, bundler.
+execFileSync(bin("attw"), [tarball], { stdio: "inherit" });

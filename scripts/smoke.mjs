@@ -1,9 +1,10 @@
 // Consumer smoke test: install the packed tarball (made by pack-check) into a fresh project
 // and use it from plain ESM, from CommonJS, and from a type-checked TypeScript file.
 import { execFileSync } from "node:child_process";
-import { mkdtempSync, readdirSync, writeFileSync, rmSync } from "node:fs";
+import { mkdtempSync, readdirSync, readFileSync, writeFileSync, rmSync } from "node:fs";
 import { tmpdir } from "node:os";
 import { join, resolve } from "node:path";
+import { compileConsumers } from "./consumers.mjs";
 
 const root = resolve(import.meta.dirname, "..");
 const packDir = join(root, ".tmp", "pack");
@@ -51,8 +52,14 @@ export { ok, q };
   const version = execFileSync(join(dir, "node_modules", ".bin", "flexura"), ["--version"], { cwd: dir, encoding: "utf8" }).trim();
   if (version === "" || version === "unknown") throw new Error(`smoke: flexura --version printed ${JSON.stringify(version)}`);
   console.log(`smoke bin ok: flexura ${version}`);
+  // The installed bin shares the package's own dist/ entries (flexura/model, flexura/report): a real check, piped in.
+  const model = readFileSync(join(root, "examples", "models", "mezzanine-beam.json"), "utf8");
+  const verdict = JSON.parse(execFileSync(join(dir, "node_modules", ".bin", "flexura"), ["check", "-", "--json"], { cwd: dir, encoding: "utf8", input: model }));
+  if (verdict.ok !== true || typeof verdict.utilisation !== "number") throw new Error(`smoke: flexura check - --json gave ${JSON.stringify(verdict)}`);
+  console.log(`smoke bin check ok: governing utilisation ${verdict.utilisation.toFixed(3)}`);
   run("node", [join(root, "node_modules", "typescript", "bin", "tsc"), "-p", "tsconfig.json"]);
   console.log("smoke typescript ok");
+  compileConsumers(dir, join(root, "node_modules", "typescript", "bin", "tsc"));
 } finally {
   rmSync(dir, { recursive: true, force: true });
 }

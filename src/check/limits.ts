@@ -1,4 +1,4 @@
-import { type IssueCollector, type IssuePath, requireFinite } from "../errors/index.js";
+import { closestName, describeValue, type IssueCollector, type IssuePath, requireFinite } from "../errors/index.js";
 
 /**
  * Span-to-deflection ratios n (limit = span / n) in common use for building members, as named
@@ -86,37 +86,105 @@ export function checkPositive(found: IssueCollector, value: unknown, path: Issue
   return false;
 }
 
-/** Validates one allowable bending stress. */
-function checkAllowable(found: IssueCollector, b: AllowableBendingStress | null | undefined, path: IssuePath): void {
-  if (typeof b === "object" && b !== null) {
-    checkPositive(found, b.tension, [...path, "tension"], "allowable tensile bending stress");
-    checkPositive(found, b.compression, [...path, "compression"], "allowable compressive bending stress");
-  } else if (b !== undefined && b !== null) {
-    checkPositive(found, b, path, "allowable bending stress");
+const isObject = (value: unknown): value is Readonly<Record<string, unknown>> => typeof value === "object" && value !== null && !Array.isArray(value);
+
+/** The value of `name` when it is `value`'s own property (never one inherited from a prototype). */
+const own = (value: Readonly<Record<string, unknown>>, name: string): unknown => (Object.hasOwn(value, name) ? value[name] : undefined);
+
+/** Validates one allowable bending stress; returns it (own properties only) when it is sound. */
+function checkAllowable(found: IssueCollector, b: unknown, path: IssuePath): AllowableBendingStress | null | undefined {
+  if (b === undefined || b === null) return b;
+  if (isObject(b)) {
+    const tension = own(b, "tension");
+    const compression = own(b, "compression");
+    const ok = checkPositive(found, tension, [...path, "tension"], "allowable tensile bending stress");
+    return checkPositive(found, compression, [...path, "compression"], "allowable compressive bending stress") && ok
+      ? { tension: tension as number, compression: compression as number }
+      : undefined;
+  }
+  return checkPositive(found, b, path, "allowable bending stress") ? (b as number) : undefined;
+}
+
+/** Validates one deflection limit; returns a copy of it (own properties only) when it is sound. */
+function checkDeflectionLimit(found: IssueCollector, d: unknown, p: IssuePath): DeflectionLimit | undefined {
+  if (!isObject(d)) {
+    found.add("deflection-limit-invalid", p, `A deflection limit is an object { kind: "ratio", ratio } or { kind: "absolute", limit }; got ${describeValue(d)}.`, { value: describeValue(d) });
+    return undefined;
+  }
+  const kind = own(d, "kind");
+  switch (kind) {
+    case "ratio": {
+      const ratio = own(d, "ratio");
+      const factor = own(d, "cantileverFactor");
+      const ok = checkPositive(found, ratio, [...p, "ratio"], "span-to-deflection ratio n");
+      const factorOk = factor === undefined || checkPositive(found, factor, [...p, "cantileverFactor"], "cantilever factor");
+      if (!ok || !factorOk) return undefined;
+      return factor === undefined ? { kind, ratio: ratio as number } : { kind, ratio: ratio as number, cantileverFactor: factor as number };
+    }
+    case "absolute": {
+      const limit = own(d, "limit");
+      return checkPositive(found, limit, [...p, "limit"], "deflection limit") ? { kind, limit: limit as number } : undefined;
+    }
+    default:
+      found.add("unknown-limit-kind", [...p, "kind"], `Unknown deflection limit kind ${describeValue(kind)}; use "ratio" or "absolute".`);
+      return undefined;
   }
 }
 
-/** Validates the limits, recording every issue. */
-export function checkLimits(found: IssueCollector, limits: MemberLimits, path: IssuePath): void {
-  checkAllowable(found, limits.bendingStress, [...path, "bendingStress"]);
-  limits.bendingStressByPart?.forEach((b, i) => checkAllowable(found, b, [...path, "bendingStressByPart", i]));
-  if (limits.shearStress !== undefined) checkPositive(found, limits.shearStress, [...path, "shearStress"], "allowable shear stress");
-  deflectionLimits(limits).forEach((d, i) => {
-    const p = Array.isArray(limits.deflection) ? [...path, "deflection", i] : [...path, "deflection"];
-    switch (d.kind) {
-      case "ratio":
-        checkPositive(found, d.ratio, [...p, "ratio"], "span-to-deflection ratio n");
-        if (d.cantileverFactor !== undefined) checkPositive(found, d.cantileverFactor, [...p, "cantileverFactor"], "cantilever factor");
-        break;
-      case "absolute":
-        checkPositive(found, d.limit, [...p, "limit"], "deflection limit");
-        break;
-      default: {
-        const never: never = d;
-        found.add("unknown-limit-kind", [...p, "kind"], `Unknown deflection limit kind ${JSON.stringify((never as { kind: unknown }).kind)}; use "ratio" or "absolute".`);
-      }
-    }
-  });
+const LIMIT_FIELDS = ["bendingStress", "bendingStressByPart", "shearStress", "deflection"] as const;
+
+/**
+ * Validates the limits, recording every issue, and returns a copy of them made of their own
+ * properties only (an inherited or misspelt field is never read as a limit), or undefined when
+ * they are not an object. Unknown fields are `unknown-field` (with a suggestion); limits that
+ * would run no check at all are `limits-empty`: a verdict never passes by default.
+ */
+export function checkLimits(found: IssueCollector, limits: unknown, path: IssuePath): MemberLimits | undefined {
+  if (!isObject(limits)) {
+    found.add("limits-not-an-object", path, `The limits must be an object such as { bendingStress: 165 }; got ${describeValue(limits)}.`, { value: describeValue(limits) });
+    return undefined;
+  }
+  for (const name of Object.keys(limits)) {
+    if ((LIMIT_FIELDS as readonly string[]).includes(name) || limits[name] === undefined) continue;
+    const near = closestName(name, LIMIT_FIELDS);
+    found.add("unknown-field", [...path, name], `Unknown limit "${name}".${near === undefined ? "" : ` Did you mean "${near}"?`} The limits are ${LIMIT_FIELDS.join(", ")}.`, { field: name });
+  }
+  const bendingStress = checkAllowable(found, own(limits, "bendingStress"), [...path, "bendingStress"]);
+  const byPartGiven = own(limits, "bendingStressByPart");
+  let bendingStressByPart: (AllowableBendingStress | null)[] | undefined;
+  if (Array.isArray(byPartGiven)) {
+    bendingStressByPart = byPartGiven.map((b: unknown, i) => checkAllowable(found, b, [...path, "bendingStressByPart", i]) ?? null);
+  } else if (byPartGiven !== undefined) {
+    found.add("not-a-list", [...path, "bendingStressByPart"], `bendingStressByPart must be a list with one allowable (or null) per part; got ${describeValue(byPartGiven)}.`);
+  }
+  const shearGiven = own(limits, "shearStress");
+  const shearStress = shearGiven === undefined ? undefined : checkPositive(found, shearGiven, [...path, "shearStress"], "allowable shear stress") ? (shearGiven as number) : undefined;
+  const deflectionGiven = own(limits, "deflection");
+  let deflection: DeflectionLimit[] | undefined;
+  if (Array.isArray(deflectionGiven)) {
+    deflection = [];
+    deflectionGiven.forEach((d: unknown, i) => {
+      const read = checkDeflectionLimit(found, d, [...path, "deflection", i]);
+      if (read !== undefined) deflection?.push(read);
+    });
+  } else if (deflectionGiven !== undefined) {
+    const read = checkDeflectionLimit(found, deflectionGiven, [...path, "deflection"]);
+    deflection = read === undefined ? undefined : [read];
+  }
+  const requested =
+    own(limits, "bendingStress") !== undefined ||
+    (Array.isArray(byPartGiven) ? byPartGiven.some((b) => b !== null && b !== undefined) : byPartGiven !== undefined) ||
+    shearGiven !== undefined ||
+    (Array.isArray(deflectionGiven) ? deflectionGiven.length > 0 : deflectionGiven !== undefined);
+  if (!requested) {
+    found.add("limits-empty", path, "Give at least one limit (bendingStress, bendingStressByPart, shearStress or deflection): with none, nothing would be checked and nothing could pass.");
+  }
+  return {
+    ...(bendingStress === undefined || bendingStress === null ? {} : { bendingStress }),
+    ...(bendingStressByPart === undefined ? {} : { bendingStressByPart }),
+    ...(shearStress === undefined ? {} : { shearStress }),
+    ...(deflection === undefined ? {} : { deflection }),
+  };
 }
 
 /** The deflection limits as a list. */

@@ -1,11 +1,11 @@
-import { IssueCollector, attempt, fail, type Result } from "../errors/index.js";
+import { IssueCollector, attempt, fail, type IssuePath, type Result } from "../errors/index.js";
 import { spanDeflections, type SpanDeflection } from "./deflection.js";
 import { bendingAllowables, checkLimits, deflectionLimits, type DeflectionLimit, type MemberLimits } from "./limits.js";
 import { stressesOf, type MemberStresses, type PeakBendingStress } from "./peaks.js";
 import { resolveSections, type MemberSections } from "./sections.js";
 import type { CheckedSolution } from "./solution.js";
 import { deflectionResult } from "./single.js";
-import { checkResult, type CheckResult } from "./types.js";
+import { checkResultAt, type CheckResult } from "./types.js";
 
 /** Everything checked on a member, and the governing check. */
 export interface MemberCheck {
@@ -13,9 +13,9 @@ export interface MemberCheck {
   readonly kind: "member-check";
   /** Every check run: bending tension and compression, shear stress, and one deflection check per limit and span. */
   readonly checks: readonly CheckResult[];
-  /** The check with the highest utilisation (the first on ties); null when no limit was given. */
-  readonly governing: CheckResult | null;
-  /** True when every check passes. */
+  /** The check with the highest utilisation (the first on ties); there is always at least one check. */
+  readonly governing: CheckResult;
+  /** True when every check passes (there is always at least one). */
   readonly pass: boolean;
   /** The peak stresses along the member. */
   readonly stresses: MemberStresses;
@@ -28,9 +28,9 @@ function bendingFormula(p: PeakBendingStress, sense: "t" | "c"): string {
   return p.part < 0 ? `sigma_${sense} = |M y_${p.fibre} / I_z|, ${which}` : `sigma_${sense} = |n M y / I_z| at part ${p.part}'s ${p.fibre}, ${which}`;
 }
 
-function deflectionCheck(limit: DeflectionLimit, d: SpanDeflection, index: number): CheckResult {
+function deflectionCheck(limit: DeflectionLimit, d: SpanDeflection, index: number, path: IssuePath): CheckResult {
   const label = `deflection, ${d.spanKind} ${d.span + 1} (x = ${d.from} to ${d.to}), limit ${index + 1}`;
-  return deflectionResult(limit, Math.abs(d.deflection), d.to - d.from, d.spanKind === "cantilever", { x: d.at, span: d.span }, label);
+  return deflectionResult(limit, Math.abs(d.deflection), d.to - d.from, d.spanKind === "cantilever", { x: d.at, span: d.span }, label, path);
 }
 
 /**
@@ -43,9 +43,12 @@ function deflectionCheck(limit: DeflectionLimit, d: SpanDeflection, index: numbe
  *
  * @param solution - A solved member (`solveBeam`'s result), in the same consistent units as the sections and limits.
  * @param sections - One section, or stretches of constant section tiling the member.
- * @param limits - Allowable stresses and deflection limits; a missing one is not checked.
- * @returns Every check, the governing one and the peaks.
- * @throws FlexuraError `allowable-not-positive`, `unknown-limit-kind`, `shear-section-missing` (a shear
+ * @param limits - Allowable stresses and deflection limits; a missing one is not checked, but at
+ *   least one must be given. Only own properties are read.
+ * @returns Every check (at least one), the governing one and the peaks.
+ * @throws FlexuraError `limits-not-an-object`, `limits-empty` (no limit given: a verdict never
+ *   passes by default), `unknown-field` (a misspelt limit), `not-a-list`, `deflection-limit-invalid`,
+ *   `result-not-finite` (a utilisation that overflows), `allowable-not-positive`, `unknown-limit-kind`, `shear-section-missing` (a shear
  *   limit but no bands on some stretch), the codes of `memberStresses`, `not-a-number` / `not-finite`.
  * @example
  * ```ts
@@ -57,8 +60,8 @@ function deflectionCheck(limit: DeflectionLimit, d: SpanDeflection, index: numbe
 export function checkMember(solution: CheckedSolution, sections: MemberSections, limits: MemberLimits): MemberCheck {
   const found = new IssueCollector();
   const stretches = resolveSections(found, sections, solution.length, ["sections"]);
-  checkLimits(found, limits, ["limits"]);
-  if (limits.shearStress !== undefined && found.empty) {
+  const given = checkLimits(found, limits, ["limits"]);
+  if (given?.shearStress !== undefined && found.empty) {
     stretches.forEach((s, i) => {
       if (s.unitShear === null) {
         const path = Array.isArray(sections) ? ["sections", i, "shear"] : ["sections", "shear"];
@@ -67,31 +70,36 @@ export function checkMember(solution: CheckedSolution, sections: MemberSections,
     });
   }
   found.throwIfAny();
+  const sound = given as MemberLimits;
   const stresses = stressesOf(solution, stretches);
   const deflections = spanDeflections(solution);
   const checks: CheckResult[] = [];
-  const bending = (t: PeakBendingStress, c: PeakBendingStress, allow: { tension: number; compression: number }, suffix: string): void => {
-    checks.push(checkResult("bending-tension", `bending stress, tension${suffix}`, t.stress, allow.tension, { x: t.x, fibre: t.fibre, y: t.y, stretch: t.stretch }, bendingFormula(t, "t")));
-    checks.push(checkResult("bending-compression", `bending stress, compression${suffix}`, -c.stress + 0, allow.compression, { x: c.x, fibre: c.fibre, y: c.y, stretch: c.stretch }, bendingFormula(c, "c")));
+  const bending = (t: PeakBendingStress, c: PeakBendingStress, allow: { tension: number; compression: number }, suffix: string, path: IssuePath): void => {
+    checks.push(checkResultAt(path, "bending-tension", `bending stress, tension${suffix}`, t.stress, allow.tension, { x: t.x, fibre: t.fibre, y: t.y, stretch: t.stretch }, bendingFormula(t, "t")));
+    checks.push(checkResultAt(path, "bending-compression", `bending stress, compression${suffix}`, -c.stress + 0, allow.compression, { x: c.x, fibre: c.fibre, y: c.y, stretch: c.stretch }, bendingFormula(c, "c")));
   };
-  const allow = bendingAllowables(limits.bendingStress);
-  if (allow !== null) bending(stresses.tension, stresses.compression, allow, "");
-  limits.bendingStressByPart?.forEach((b, i) => {
+  const allow = bendingAllowables(sound.bendingStress);
+  if (allow !== null) bending(stresses.tension, stresses.compression, allow, "", ["limits", "bendingStress"]);
+  sound.bendingStressByPart?.forEach((b, i) => {
     const partAllow = bendingAllowables(b);
     if (partAllow === null) return;
     const p = stresses.parts.find((q) => q.part === i);
     if (p === undefined) fail("part-not-found", ["limits", "bendingStressByPart", i], `No part ${i} in the sections' parts: give the sections with their parts (memberSection does) or remove this limit.`);
-    bending(p.tension, p.compression, partAllow, `, part ${i}`);
+    bending(p.tension, p.compression, partAllow, `, part ${i}`, ["limits", "bendingStressByPart", i]);
   });
-  if (limits.shearStress !== undefined && stresses.shear !== null) {
+  if (sound.shearStress !== undefined && stresses.shear !== null) {
     const v = stresses.shear;
-    checks.push(checkResult("shear-stress", "shear stress", v.stress, limits.shearStress, { x: v.x, y: v.y, stretch: v.stretch }, "tau = |V| Q / (I_z b)"));
+    checks.push(checkResultAt(["limits", "shearStress"], "shear-stress", "shear stress", v.stress, sound.shearStress, { x: v.x, y: v.y, stretch: v.stretch }, "tau = |V| Q / (I_z b)"));
   }
-  deflectionLimits(limits).forEach((limit, i) => {
-    for (const d of deflections) checks.push(deflectionCheck(limit, d, i));
+  const list = deflectionLimits(sound);
+  list.forEach((limit, i) => {
+    const path = Array.isArray(limits.deflection) ? ["limits", "deflection", i] : ["limits", "deflection"];
+    for (const d of deflections) checks.push(deflectionCheck(limit, d, i, path));
   });
-  let governing: CheckResult | null = null;
-  for (const c of checks) if (governing === null || c.utilisation > governing.utilisation) governing = c;
+  // Every limit given yields at least one check (there is always a span); a verdict never passes with none.
+  if (checks.length === 0) fail("no-checks-run", ["limits"], "No check could be run with these limits and sections, so there is no verdict.");
+  let governing = checks[0] as CheckResult;
+  for (const c of checks) if (c.utilisation > governing.utilisation) governing = c;
   return { kind: "member-check", checks, governing, pass: checks.every((c) => c.pass), stresses, deflections };
 }
 

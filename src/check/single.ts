@@ -1,6 +1,6 @@
-import { IssueCollector, attempt, requireFinite, type Result } from "../errors/index.js";
+import { IssueCollector, attempt, requireFinite, type IssuePath, type Result } from "../errors/index.js";
 import { checkLimits, checkPositive, type DeflectionLimit } from "./limits.js";
-import { checkResult, type CheckLocation, type CheckResult } from "./types.js";
+import { checkResultAt, type CheckLocation, type CheckResult } from "./types.js";
 
 /** Options of the single checks: where the demand acts, to carry into the result. */
 export interface SingleCheckOptions {
@@ -29,7 +29,7 @@ export function checkBendingStress(stress: number, allowable: number, options?: 
   checkPositive(found, allowable, ["allowable"], "allowable bending stress");
   found.throwIfAny();
   const kind = stress >= 0 ? "bending-tension" : "bending-compression";
-  return checkResult(kind, `bending stress, ${stress >= 0 ? "tension" : "compression"}`, Math.abs(stress), allowable, options?.at ?? { x: 0 }, "|sigma| <= allowable");
+  return checkResultAt(["allowable"], kind, `bending stress, ${stress >= 0 ? "tension" : "compression"}`, Math.abs(stress), allowable, options?.at ?? { x: 0 }, "|sigma| <= allowable");
 }
 
 /**
@@ -62,7 +62,7 @@ export function checkShearStress(stress: number, allowable: number, options?: Si
   requireFinite(found, stress, ["stress"], "shear stress");
   checkPositive(found, allowable, ["allowable"], "allowable shear stress");
   found.throwIfAny();
-  return checkResult("shear-stress", "shear stress", Math.abs(stress), allowable, options?.at ?? { x: 0 }, "|tau| <= allowable");
+  return checkResultAt(["allowable"], "shear-stress", "shear stress", Math.abs(stress), allowable, options?.at ?? { x: 0 }, "|tau| <= allowable");
 }
 
 /**
@@ -102,18 +102,19 @@ export function checkDeflection(deflection: number, length: number, limit: Defle
   const found = new IssueCollector();
   requireFinite(found, deflection, ["deflection"], "deflection");
   checkPositive(found, length, ["length"], "span length");
-  checkLimits(found, { deflection: limit }, []);
+  const checked = checkLimits(found, { deflection: limit }, []);
   found.throwIfAny();
+  const sound = (checked?.deflection as readonly DeflectionLimit[] | undefined)?.[0] ?? limit;
   const cantilever = options?.cantilever === true;
-  return deflectionResult(limit, Math.abs(deflection), length, cantilever, options?.at ?? { x: 0 }, cantilever ? "deflection, cantilever" : "deflection, span");
+  return deflectionResult(sound, Math.abs(deflection), length, cantilever, options?.at ?? { x: 0 }, cantilever ? "deflection, cantilever" : "deflection, span");
 }
 
 /** The deflection check for validated input (shared with the member check). */
-export function deflectionResult(limit: DeflectionLimit, demand: number, length: number, cantilever: boolean, at: CheckLocation, label: string): CheckResult {
-  if (limit.kind === "absolute") return checkResult("deflection", label, demand, limit.limit, at, `|delta| <= ${limit.limit}`);
+export function deflectionResult(limit: DeflectionLimit, demand: number, length: number, cantilever: boolean, at: CheckLocation, label: string, path: IssuePath = ["limit"]): CheckResult {
+  if (limit.kind === "absolute") return checkResultAt(path, "deflection", label, demand, limit.limit, at, `|delta| <= ${limit.limit}`);
   const factor = cantilever ? (limit.cantileverFactor ?? 2) : 1;
   const formula = `|delta| <= ${factor === 1 ? "" : `${factor} `}L / ${limit.ratio}${cantilever ? " (cantilever)" : ""}`;
-  return checkResult("deflection", label, demand, (factor * length) / limit.ratio, at, formula);
+  return checkResultAt(path, "deflection", label, demand, (factor * length) / limit.ratio, at, formula);
 }
 
 /**

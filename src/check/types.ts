@@ -1,3 +1,4 @@
+import { fail, type IssuePath } from "../errors/index.js";
 import type { ExtremeFibre } from "../stress/index.js";
 
 /** Which check a result is for. */
@@ -47,12 +48,27 @@ export interface CheckResult {
 /**
  * Builds a check result from a demand and a capacity.
  *
+ * @throws FlexuraError `result-not-finite` when demand / capacity, or either of them, is not a finite
+ *   number above zero (a capacity so small, or a demand so large, that the ratio overflows; a
+ *   capacity that overflows or underflows): such a check would
+ *   otherwise pass or fail on an infinity.
  * @example
  * ```ts
  * checkResult("shear-stress", "shear stress", 60, 100, { x: 0 }, "tau = |V| Q / (I b)").utilisation; // 0.6
  * ```
  */
 export function checkResult(check: CheckKind, label: string, demand: number, capacity: number, at: CheckLocation, formula: string): CheckResult {
+  return checkResultAt([], check, label, demand, capacity, at, formula);
+}
+
+/** {@link checkResult}, reporting a ratio that is not finite at `path` (the limit it came from). */
+export function checkResultAt(path: IssuePath, check: CheckKind, label: string, demand: number, capacity: number, at: CheckLocation, formula: string): CheckResult {
   const utilisation = demand / capacity;
+  if (!Number.isFinite(utilisation) || !Number.isFinite(demand) || !(capacity > 0 && Number.isFinite(capacity))) {
+    fail("result-not-finite", path, `The ${label} check cannot be computed in double precision: demand ${demand} / capacity ${capacity} is not a finite number. Check the units of the limit and of the member.`, {
+      demand,
+      capacity,
+    });
+  }
   return { kind: "check", check, label, demand, capacity, utilisation, pass: utilisation <= 1, at, formula };
 }

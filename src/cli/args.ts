@@ -1,4 +1,5 @@
 import { parseArgs } from "node:util";
+import { closestName } from "../errors/index.js";
 
 /** A command line, understood. */
 export type CliCommand =
@@ -22,13 +23,15 @@ const COMMANDS = ["analyze", "check", "schema"] as const;
  */
 export function parseCommandLine(argv: readonly string[]): CliCommand {
   const [first, ...rest] = argv;
-  if (first === undefined) return { kind: "help", topic: "main" };
+  if (first === undefined) return usage("Give a command: analyze, check or schema.", "main");
   if (first === "--help" || first === "-h" || first === "help") return { kind: "help", topic: "main" };
   if (first === "--version" || first === "-v") return rest.length === 0 ? { kind: "version" } : usage("--version takes no arguments.", "main");
   const command = COMMANDS.find((c) => c === first);
   if (command === undefined) {
     const what = first.startsWith("-") ? `Unknown option "${first}".` : `Unknown command "${first}".`;
-    return usage(`${what} The commands are: analyze, check, schema.`, "main");
+    const near = first.startsWith("-") ? undefined : closestName(first, COMMANDS);
+    const hint = near === undefined ? "" : ` Did you mean "${near}"?`;
+    return usage(`${what}${hint} The commands are: analyze, check, schema.`, "main");
   }
   let parsed: { values: Record<string, string | boolean | undefined>; positionals: string[] };
   try {

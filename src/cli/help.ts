@@ -9,6 +9,9 @@ Usage:
   flexura COMMAND --help                             help on one command
   flexura --version                                  print the version
 
+A file name of - reads the model from standard input. With --json, every failure is one
+JSON object on stdout: { "ok": false, "exitCode", "problems": [{ "code", "path", "message" }] }.
+
 Exit codes:
   0  ok (for check: every check passed)
   1  check: at least one check failed
@@ -22,7 +25,7 @@ for code compliance and for review by a licensed engineer. Local codes govern.
 `,
   analyze: `Usage: flexura analyze MODEL.json [--json] [--svg DIR]
 
-Analyses one model file and prints a readable report: inputs with units, reactions, peaks of
+Analyses one model file (- for standard input) and prints a readable report: inputs with units, reactions, peaks of
 shear, moment, slope and deflection with their locations, section properties, stresses, checks
 with utilisation, and the caution.
 
@@ -41,7 +44,8 @@ Analyses each model file and checks it against its limits. Prints one verdict pe
 with the governing utilisation. Meant for scripts and CI.
 
 Options:
-  --json       print one JSON object per file (one per line) instead of the verdicts
+  --json       print one compact JSON verdict per file, one per line, valid or not:
+               { file, ok, pass, exitCode, checks, governing, utilisation, failed, problems }
   -h, --help   show this help
 
 Exit codes: 0 every check of every file passed (also when a model gives no limits),

@@ -1,8 +1,9 @@
 // The real file system and streams for runCli: the only Node-specific code of the command.
-import { existsSync, mkdirSync, readFileSync, writeFileSync } from "node:fs";
+import { existsSync, mkdirSync, readFileSync, statSync, writeFileSync } from "node:fs";
 import { dirname, join, resolve } from "node:path";
 import { fileURLToPath } from "node:url";
-import type { CliIo } from "./run.js";
+import type { CliIo } from "./io.js";
+import { MAX_MODEL_FILE_BYTES } from "./load.js";
 
 /**
  * The version of the installed flexura package, found by walking up from this file to the
@@ -24,7 +25,12 @@ export function packageVersion(from: string = fileURLToPath(import.meta.url)): s
 /** The {@link CliIo} of a real process: files on disk, process.stdout and process.stderr. */
 export function nodeIo(): CliIo {
   return {
-    readText: (path) => readFileSync(path, "utf8"),
+    readText: (path) => {
+      const size = statSync(path).isFile() ? statSync(path).size : 0;
+      if (size > MAX_MODEL_FILE_BYTES) throw Object.assign(new Error(`${path} is ${size} bytes`), { code: "EFBIG" });
+      return readFileSync(path, "utf8");
+    },
+    readStdin: () => readFileSync(0, "utf8"),
     writeText: (folder, name, text) => {
       mkdirSync(folder, { recursive: true });
       const file = join(folder, name);

@@ -1,31 +1,18 @@
-import { formatPath, isFlexuraError, type FlexuraError } from "../errors/index.js";
-import { analysisToJson, analyzeModel, modelSchema, parseModel, type ModelAnalysis } from "../model/index.js";
+import { analysisToJson, modelSchema, type ModelAnalysis } from "../model/index.js";
 import { formatReportNumber, reportDiagrams, textReport } from "../report/index.js";
 import { parseCommandLine } from "./args.js";
 import { EXIT, type ExitCode } from "./exit-codes.js";
 import { HELP } from "./help.js";
-import { readJsonText } from "./json-text.js";
+import type { CliIo } from "./io.js";
+import { displayName, loadAndAnalyze } from "./load.js";
+import { fileFailure, usageFailure, type CliFailure } from "./problems.js";
 
-/**
- * Everything the command touches outside itself, handed in so that the logic stays pure and
- * testable; `main.ts` supplies the real file system and streams.
- */
-export interface CliIo {
-  /** Reads a UTF-8 text file; throws (with a Node `code` such as `ENOENT`) when it cannot. */
-  readonly readText: (path: string) => string;
-  /** Writes a UTF-8 text file, creating its folder first if needed; throws when it cannot. */
-  readonly writeText: (folder: string, name: string, text: string) => string;
-  /** Writes to standard output. */
-  readonly stdout: (text: string) => void;
-  /** Writes to standard error. */
-  readonly stderr: (text: string) => void;
-  /** The package version, for `--version`. */
-  readonly version: string;
-}
+export type { CliIo } from "./io.js";
 
 /**
  * Runs the `flexura` command with the arguments after the command name and returns its exit
- * code (see `EXIT`). Never throws: every failure becomes a plain message on `io.stderr`.
+ * code (see `EXIT`). Never throws: every failure becomes a plain message on `io.stderr`, or, with
+ * `--json`, one JSON object on `io.stdout` (`{ "ok": false, "exitCode", "problems": [...] }`).
  *
  * @example
  * ```ts
@@ -33,11 +20,18 @@ export interface CliIo {
  * ```
  */
 export function runCli(argv: readonly string[], io: CliIo): ExitCode {
+  const json = argv.includes("--json");
   try {
     return dispatch(argv, io);
   } catch (e) {
     const what = e instanceof Error ? e.message : String(e);
-    io.stderr(`flexura: internal error: ${what}\nThis is a bug in flexura; please report it with the model file.\n`);
+    const message = `internal error: ${what}. This is a bug in flexura; please report it with the model file.`;
+    try {
+      if (json) io.stdout(`${JSON.stringify({ ok: false, exitCode: EXIT.internal, problems: [{ code: "internal-error", path: "", message }] })}\n`);
+      else io.stderr(`flexura: ${message}\n`);
+    } catch {
+      // The streams themselves failed: the exit code is all that is left to say it.
+    }
     return EXIT.internal;
   }
 }
@@ -52,6 +46,7 @@ function dispatch(argv: readonly string[], io: CliIo): ExitCode {
       io.stdout(`${io.version}\n`);
       return EXIT.ok;
     case "usage-error":
+      if (argv.includes("--json")) return reportFailure(undefined, usageFailure(command.message), true, io);
       io.stderr(`flexura: ${command.message}\n\n${HELP[command.topic]}`);
       return EXIT.usage;
     case "schema":
@@ -75,91 +70,124 @@ function rank(code: ExitCode): number {
   return code === EXIT.checkFailed ? 1 : code === EXIT.ok ? 0 : 2 + code;
 }
 
-type Loaded = { readonly ok: true; readonly analysis: ModelAnalysis } | { readonly ok: false; readonly code: ExitCode };
-
-/** Reads, parses, validates and analyses one model file, reporting any failure on stderr. */
-export function loadAndAnalyze(file: string, io: CliIo): Loaded {
-  let text: string;
-  try {
-    text = io.readText(file);
-  } catch (e) {
-    io.stderr(`flexura: cannot read ${file}: ${fileProblem(e)}\n`);
-    return { ok: false, code: EXIT.file };
+/** Says what failed: plain lines on stderr, or one JSON object on stdout with `--json`; returns the exit code. */
+function reportFailure(file: string | undefined, failure: CliFailure, json: boolean, io: CliIo): ExitCode {
+  if (json) {
+    io.stdout(`${JSON.stringify({ ok: false, ...(file === undefined ? {} : { file }), exitCode: failure.exitCode, problems: failure.problems })}\n`);
+  } else {
+    io.stderr(failureText(file === undefined ? undefined : displayName(file), failure));
   }
-  const json = readJsonText(text);
-  if (!json.ok) {
-    const p = json.problem;
-    io.stderr(`flexura: ${file} is not valid JSON: line ${p.line}, column ${p.column}: ${p.message}\n`);
-    return { ok: false, code: EXIT.invalidModel };
-  }
-  try {
-    return { ok: true, analysis: analyzeModel(parseModel(json.value)) };
-  } catch (e) {
-    if (!isFlexuraError(e)) throw e;
-    io.stderr(modelProblems(file, e));
-    return { ok: false, code: EXIT.invalidModel };
-  }
+  return failure.exitCode;
 }
 
-/** Formats every issue of a model error as plain lines: `path: message [code]`. */
-export function modelProblems(file: string, error: FlexuraError): string {
-  const n = error.issues.length;
-  const head = n === 1 ? `flexura: ${file} has a problem:` : `flexura: ${file} has ${n} problems:`;
-  const lines = error.issues.map((i) => `  ${formatPath(i.path)}: ${i.message} [${i.code}]`);
+/** The plain-text form of a failure, as the command prints it on stderr. */
+export function failureText(name: string | undefined, failure: CliFailure): string {
+  const [only, ...more] = failure.problems;
+  if (only !== undefined && more.length === 0 && only.path === "") {
+    if (only.code === "json-syntax") return `flexura: ${name ?? "input"} is ${only.message}\n`;
+    if (failure.writing === true) return `flexura: ${only.message}\n`;
+    if (failure.exitCode === EXIT.file) return `flexura: cannot read ${name ?? "input"}: ${only.message}\n`;
+    if (name === undefined) return `flexura: ${only.message}\n`;
+    if (only.code.startsWith("file-")) return `flexura: ${name}: ${only.message}\n`;
+  }
+  const n = failure.problems.length;
+  const head = n === 1 ? `flexura: ${name ?? "input"} has a problem:` : `flexura: ${name ?? "input"} has ${n} problems:`;
+  const lines = failure.problems.map((p) => `  ${p.path === "" ? "(file)" : p.path}: ${p.message} [${p.code}]`);
   return `${head}\n${lines.join("\n")}\n`;
 }
 
-function fileProblem(e: unknown): string {
-  const code = typeof e === "object" && e !== null ? (e as { code?: unknown }).code : undefined;
-  switch (code) {
-    case "ENOENT":
-      return "no such file";
-    case "EISDIR":
-      return "it is a folder, not a file";
-    case "EACCES":
-    case "EPERM":
-      return "permission denied";
-    default:
-      return e instanceof Error ? e.message : String(e);
-  }
-}
-
 function baseName(file: string): string {
+  if (file === "-") return "model";
   const last = file.split(/[\\/]/).pop() ?? file;
   return last.replace(/\.json$/i, "") || "model";
 }
 
 function analyzeCommand(file: string, json: boolean, svg: string | undefined, io: CliIo): ExitCode {
   const loaded = loadAndAnalyze(file, io);
-  if (!loaded.ok) return loaded.code;
+  if (!loaded.ok) return reportFailure(file, loaded.failure, json, io);
   const analysis = loaded.analysis;
-  io.stdout(json ? `${JSON.stringify(analysisToJson(analysis), null, 2)}\n` : textReport(analysis));
-  if (svg === undefined) return EXIT.ok;
-  const written: string[] = [];
-  for (const d of reportDiagrams(analysis)) {
-    const name = `${baseName(file)}-${d.name}.svg`;
-    try {
-      written.push(io.writeText(svg, name, d.svg));
-    } catch (e) {
-      io.stderr(`flexura: cannot write ${name} in ${svg}: ${fileProblem(e)}\n`);
-      return EXIT.file;
+  if (svg !== undefined) {
+    const written: string[] = [];
+    for (const d of reportDiagrams(analysis)) {
+      const name = `${baseName(file)}-${d.name}.svg`;
+      try {
+        written.push(io.writeText(svg, name, d.svg));
+      } catch (e) {
+        const failure = fileFailure(e);
+        const message = `cannot write ${name} in ${svg}: ${failure.problems[0]?.message ?? "unknown reason"}`;
+        return reportFailure(file, { exitCode: EXIT.file, problems: [{ code: failure.problems[0]?.code ?? "file-unwritable", path: "", message }], writing: true }, json, io);
+      }
     }
+    io.stderr(`flexura: wrote ${written.length} diagrams: ${written.join(", ")}\n`);
   }
-  io.stderr(`flexura: wrote ${written.length} diagrams: ${written.join(", ")}\n`);
+  io.stdout(json ? `${JSON.stringify(analysisToJson(analysis), null, 2)}\n` : textReport(analysis));
   return EXIT.ok;
 }
 
 function checkCommand(file: string, json: boolean, io: CliIo): ExitCode {
   const loaded = loadAndAnalyze(file, io);
-  if (!loaded.ok) return loaded.code;
+  if (!loaded.ok) {
+    if (!json) return reportFailure(file, loaded.failure, false, io);
+    io.stdout(`${JSON.stringify(failedVerdict(file, loaded.failure))}\n`);
+    return loaded.failure.exitCode;
+  }
   const analysis = loaded.analysis;
   const verdict = analysis.checks.every((c) => c.pass) ? EXIT.ok : EXIT.checkFailed;
-  if (json) {
-    io.stdout(`${JSON.stringify(analysisToJson(analysis))}\n`);
-    return verdict;
-  }
-  io.stdout(checkVerdict(file, analysis));
+  io.stdout(json ? `${JSON.stringify(compactVerdict(file, analysis))}\n` : checkVerdict(file, analysis));
   return verdict;
+}
+
+/**
+ * The one-line JSON verdict `flexura check --json` writes per file: whether it was analysed (`ok`), whether
+ * every check passed (`pass`), how many checks ran, the governing check and its utilisation, and the problems.
+ */
+export interface CompactVerdict {
+  /** The file name as given (`-` for standard input). */
+  readonly file: string;
+  /** The model was read and analysed (no problems). */
+  readonly ok: boolean;
+  /** Every check passed (false when the model could not be analysed, or when nothing was checked is `true` with `checks: 0`). */
+  readonly pass: boolean;
+  /** The exit code this file alone gives. */
+  readonly exitCode: ExitCode;
+  /** Number of checks run. */
+  readonly checks: number;
+  /** Description of the check with the highest utilisation, or null. */
+  readonly governing: string | null;
+  /** Its utilisation (demand / capacity, dimensionless), or null. */
+  readonly utilisation: number | null;
+  /** The failing checks' descriptions. */
+  readonly failed: readonly string[];
+  /** What stopped the analysis (empty when `ok`). */
+  readonly problems: CliFailure["problems"];
+}
+
+/** The compact verdict of an analysed model. */
+export function compactVerdict(file: string, analysis: ModelAnalysis): CompactVerdict {
+  const checks = analysis.checks;
+  const governing = governingCheck(analysis);
+  const pass = checks.every((c) => c.pass);
+  return {
+    file,
+    ok: true,
+    pass,
+    exitCode: pass ? EXIT.ok : EXIT.checkFailed,
+    checks: checks.length,
+    governing: governing?.description ?? null,
+    utilisation: governing?.utilisation ?? null,
+    failed: checks.filter((c) => !c.pass).map((c) => c.description),
+    problems: [],
+  };
+}
+
+function failedVerdict(file: string, failure: CliFailure): CompactVerdict {
+  return { file, ok: false, pass: false, exitCode: failure.exitCode, checks: 0, governing: null, utilisation: null, failed: [], problems: failure.problems };
+}
+
+function governingCheck(analysis: ModelAnalysis): ModelAnalysis["checks"][number] | undefined {
+  let governing: ModelAnalysis["checks"][number] | undefined;
+  for (const c of analysis.checks) if (governing === undefined || c.utilisation > governing.utilisation) governing = c;
+  return governing;
 }
 
 /**
@@ -173,14 +201,14 @@ function checkCommand(file: string, json: boolean, io: CliIo): ExitCode {
  */
 export function checkVerdict(file: string, analysis: ModelAnalysis): string {
   const checks = analysis.checks;
-  if (checks.length === 0) return `PASS ${file}: no limits given, nothing to check\n`;
+  const name = displayName(file);
+  if (checks.length === 0) return `PASS ${name}: no limits given, nothing to check\n`;
   const failed = checks.filter((c) => !c.pass);
-  let governing = checks[0];
-  for (const c of checks) if (governing === undefined || c.utilisation > governing.utilisation) governing = c;
+  const governing = governingCheck(analysis);
   const gov = governing === undefined ? "" : `, governing utilisation ${formatReportNumber(governing.utilisation, 3)} (${governing.description})`;
-  if (failed.length === 0) return `PASS ${file}: ${checks.length} checks${gov}\n`;
+  if (failed.length === 0) return `PASS ${name}: ${checks.length} checks${gov}\n`;
   const lines = failed.map(
     (c) => `  FAIL ${c.description}: ${formatReportNumber(c.demand)} ${c.unit} against ${formatReportNumber(c.capacity)} ${c.unit} (utilisation ${formatReportNumber(c.utilisation, 3)})`,
   );
-  return `FAIL ${file}: ${failed.length} of ${checks.length} checks fail${gov}\n${lines.join("\n")}\n`;
+  return `FAIL ${name}: ${failed.length} of ${checks.length} checks fail${gov}\n${lines.join("\n")}\n`;
 }

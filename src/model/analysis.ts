@@ -209,7 +209,10 @@ export interface ModelResults {
   readonly stress?: ModelStress;
   /** Checks against the model's limits (those that could be evaluated). */
   readonly checks: readonly ModelCheck[];
-  /** True when every check passes (true when there are none). */
+  /**
+   * True when at least one check ran and every check passes. False when a check fails, and when
+   * no limit was given (`checks` is then empty): with nothing checked there is no pass to claim.
+   */
   readonly pass: boolean;
   /** Shear, moment, slope and deflection along the member, for plotting. */
   readonly diagrams: ModelDiagrams;

@@ -1,12 +1,12 @@
 import { solveBeam, type BeamSolution } from "../beam/index.js";
-import { attempt, FlexuraError, isFlexuraError, type FlexuraIssue, type Result } from "../errors/index.js";
+import { attempt, fail, FlexuraError, formatPath, isFlexuraError, type FlexuraIssue, type IssuePath, type Result } from "../errors/index.js";
 import type { ModelAnalysis, ModelScale, ModelWarning } from "./analysis.js";
 import { beamInputInSI } from "./beam-input.js";
 import { modelVerdicts } from "./checks.js";
 import { diagramsOf, peaksInModelUnits } from "./diagrams.js";
 import type { Model } from "./model.js";
 import { sectionInSI, sectionResult, type SectionInSI } from "./model-section.js";
-import { withoutNegativeZero } from "./plain.js";
+import { plainResults } from "./plain.js";
 import { scaleOfUnits } from "./units.js";
 
 function fullScale(model: Model): ModelScale {
@@ -16,10 +16,13 @@ function fullScale(model: Model): ModelScale {
   return scale as ModelScale;
 }
 
+/** Where the member's stiffness comes from in the model. */
+const stiffnessPath = (model: Model): IssuePath => (model.segments === undefined ? (model.I === undefined ? ["section"] : ["I"]) : ["segments"]);
+
 /** Beam issues point at the solver's input; point them at the model's fields instead. */
 function toModelPath(i: FlexuraIssue, model: Model): FlexuraIssue {
   const [head, ...rest] = i.path;
-  if (head === "stiffness") return { ...i, path: model.segments === undefined ? (model.I === undefined ? ["section"] : ["I"]) : ["segments", ...rest] };
+  if (head === "stiffness") return { ...i, path: model.segments === undefined ? stiffnessPath(model) : ["segments", ...rest] };
   if (head === "length") return { ...i, path: ["length"] };
   return i;
 }
@@ -44,6 +47,24 @@ function axesInclined(section: SectionInSI): boolean {
 }
 
 /**
+ * Refuses a result that double precision cannot hold (a member so flexible, or loads so large,
+ * that a deflection or moment overflows), pointing at the input that most likely caused it.
+ */
+function refuseNotFinite(model: Model, where: IssuePath, value: number): never {
+  const [head, second] = where;
+  const field = head === "diagrams" ? second : head;
+  const cause: IssuePath =
+    field === "slope" || field === "deflection" ? stiffnessPath(model) : field === "section" || field === "stress" ? ["section"] : field === "checks" ? ["limits"] : ["loads"];
+  const hint =
+    field === "slope" || field === "deflection"
+      ? "the member is too flexible for the loads: check the units and size of E and I"
+      : field === "section" || field === "stress"
+        ? "check the section's dimensions and units"
+        : "check the sizes and units of the loads and supports";
+  fail("result-not-finite", cause, `The result ${formatPath(where)} is ${value}, beyond what double precision can hold: ${hint}.`, { result: formatPath(where), value: String(value) });
+}
+
+/**
  * Analyses a model: converts it to SI, solves the member, and when the model has a section,
  * computes its properties and the extreme bending and shear stresses; checks the member against
  * the model's limits. Stresses and checks come from the member-check module (`checkMember` of
@@ -57,7 +78,9 @@ function axesInclined(section: SectionInSI): boolean {
  *
  * @param model - A model from {@link parseModel}. It is not changed.
  * @returns Reactions, peaks, diagrams, section properties, stresses and checks.
- * @throws FlexuraError the solver's codes (`mechanism`, `support-duplicate`, `stiffness-not-tiling`,
+ * @throws FlexuraError `result-not-finite` when a result (a deflection, a moment, a stress, a
+ *   utilisation) would be NaN or infinite in double precision, with the path of the input that
+ *   caused it (`I`, `section`, `loads`, `limits.bendingStress`); the solver's codes (`mechanism`, `support-duplicate`, `stiffness-not-tiling`,
  *   ...; see docs/errors.md) with paths into the model; the section builders' codes under `section`;
  *   unit codes under `units` for a hand-made model with bad units; `stiffness-missing`.
  * @example
@@ -83,7 +106,7 @@ export function analyzeModel(model: Model): ModelAnalysis {
   }
   const { checks, stress } = modelVerdicts(model, solution, section, scale, warnings);
   const peaks = solution.peaks;
-  const results = withoutNegativeZero({
+  const plain = plainResults({
     reactions: solution.reactions.map((r) => ({
       support: r.support,
       kind: model.supports[r.support]?.kind ?? "pin",
@@ -98,10 +121,12 @@ export function analyzeModel(model: Model): ModelAnalysis {
     ...(section === undefined || model.section === undefined ? {} : { section: sectionResult(model.section.shape, section.properties, scale) }),
     ...(stress === undefined ? {} : { stress }),
     checks,
-    pass: checks.every((c) => c.pass),
+    pass: checks.length > 0 && checks.every((c) => c.pass),
     diagrams: diagramsOf(solution, scale, model.units),
     warnings,
   });
+  if (plain.notFinite !== undefined) refuseNotFinite(model, plain.notFinite, plain.bad);
+  const results = plain.value;
   return {
     model,
     units: model.units,

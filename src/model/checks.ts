@@ -5,6 +5,7 @@ import {
   checkDeflection,
   checkMember,
   memberSection,
+  memberStresses,
   spanDeflections,
   type CheckResult,
   type DeflectionLimit,
@@ -101,7 +102,7 @@ function extremeOf(p: PeakBendingStress, scale: ModelScale, multiMaterial: boole
   return { value: p.stress / scale.stress, at: p.x / scale.length, y: p.y / scale.sectionLength, ...(multiMaterial && p.part >= 0 ? { part: p.part } : {}) };
 }
 
-function stressOf(r: MemberCheck, scale: ModelScale, multiMaterial: boolean): ModelStress {
+function stressOf(r: Pick<MemberCheck, "stresses">, scale: ModelScale, multiMaterial: boolean): ModelStress {
   const s = r.stresses;
   const v = s.shear;
   return {
@@ -140,9 +141,12 @@ function withSection(model: Model, solution: BeamSolution, section: SectionInSI,
       message: `The bending stress in part${multi.unchecked.length === 1 ? "" : "s"} ${multi.unchecked.join(", ")} of the section is not checked: a part of its own material needs its own "bendingStress".`,
     });
   }
-  let r: MemberCheck;
+  const member = memberSection(section.geometry, section.referenceModulus === undefined ? undefined : { referenceModulus: section.referenceModulus });
+  const anyLimit = limits.bendingStress !== undefined || limits.shearStress !== undefined || limits.deflection !== undefined || (limits.bendingStressByPart ?? []).some((b) => b !== null);
+  let r: Pick<MemberCheck, "checks" | "stresses" | "deflections">;
   try {
-    r = checkMember(solution, memberSection(section.geometry, section.referenceModulus === undefined ? undefined : { referenceModulus: section.referenceModulus }), limits);
+    // With no limit there is nothing to check (checkMember refuses to give a verdict then): the stresses alone.
+    r = anyLimit ? checkMember(solution, member, limits) : { checks: [], stresses: memberStresses(solution, member), deflections: [] };
   } catch (e) {
     if (!isFlexuraError(e)) throw e;
     throw new FlexuraError(e.issues.map((i) => ({ ...i, path: i.path[0] === "limits" ? i.path : ["section"] })));

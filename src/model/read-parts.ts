@@ -127,6 +127,10 @@ function readDeflectionLimit(reader: Reader, value: unknown): ModelDeflectionLim
     const ratio = RATIO.exec(value);
     if (ratio !== null) {
       const divisor = Number(ratio[1]);
+      if (!Number.isFinite(divisor)) {
+        reader.found.push(issue("not-finite", path, `The divisor of the deflection limit must be a finite number; ${JSON.stringify(value)} reads as ${divisor}.`, { value }));
+        return undefined;
+      }
       requirePositive(reader, divisor, path, "divisor of the deflection limit");
       return divisor > 0 && Number.isFinite(divisor) ? { kind: "ratio", ratio: divisor } : undefined;
     }

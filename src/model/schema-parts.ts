@@ -18,7 +18,7 @@ export const LOAD_TYPES = ["point", "moment", "distributed"] as const;
 /** The unit-system presets a model may name in `units.system`. */
 export const UNIT_SYSTEM_NAMES = ["siNewtonMetre", "siKilonewtonMetre", "siNewtonMillimetre", "usKipFoot", "usKipInch"] as const;
 
-const unitField = (description: string): SchemaNode => ({ type: "string", minLength: 1, description });
+const unitField = (description: string): SchemaNode => ({ type: "string", minLength: 1, pattern: "\\S", description });
 
 const units: SchemaNode = {
   type: "object",
@@ -75,7 +75,7 @@ const support: SchemaNode = {
   ],
 };
 
-const loadCase: SchemaNode = { type: "string", minLength: 1, description: "The load case it belongs to. All loads act together, factor 1." };
+const loadCase: SchemaNode = { type: "string", minLength: 1, pattern: "\\S", description: "The load case it belongs to. All loads act together, factor 1." };
 
 const pointLoad: SchemaNode = {
   type: "object",

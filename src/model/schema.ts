@@ -2,6 +2,15 @@ import { MODEL_FORMAT_VERSION } from "./model.js";
 import { definitions } from "./schema-parts.js";
 import { sectionDefinitions } from "./schema-section.js";
 
+/** Freezes plain data and everything it holds, so that no caller can change what it shares. */
+function deepFreeze<T>(value: T): T {
+  if (typeof value === "object" && value !== null && !Object.isFrozen(value)) {
+    Object.freeze(value);
+    for (const child of Object.values(value)) deepFreeze(child);
+  }
+  return value;
+}
+
 /** The `$id` of the published model-file schema. */
 export const MODEL_SCHEMA_ID = "urn:flexura:model-schema:1";
 
@@ -17,6 +26,9 @@ export interface ModelJsonSchema {
  * and that {@link parseModel} checks structure against. Point an editor at it (`"$schema"` in the
  * model file, or the editor's schema settings) to get completion and checking as you type.
  *
+ * It is frozen all the way down: code that tries to change it gets a TypeError (in strict mode),
+ * and {@link parseModel} always checks against the published schema.
+ *
  * The schema checks structure (fields, types, allowed values); {@link parseModel} also checks
  * meaning (units, positions inside the member, a source of stiffness).
  *
@@ -25,7 +37,7 @@ export interface ModelJsonSchema {
  * console.log(JSON.stringify(modelSchema, null, 2)); // what `flexura schema` prints
  * ```
  */
-export const modelSchema: ModelJsonSchema = {
+export const modelSchema: ModelJsonSchema = deepFreeze({
   $schema: "https://json-schema.org/draft/2020-12/schema",
   $id: MODEL_SCHEMA_ID,
   title: "a flexura model",
@@ -60,4 +72,4 @@ export const modelSchema: ModelJsonSchema = {
   },
   additionalProperties: false,
   $defs: { ...definitions, ...sectionDefinitions },
-};
+});

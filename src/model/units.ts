@@ -2,6 +2,7 @@ import { describeValue, type FlexuraIssue, issue } from "../errors/index.js";
 import { dimensionOfKind, fitsDimension, tryUnitFactor, unitSystems, type QuantityKind, type UnitSystemName } from "../units/index.js";
 import type { ModelScale } from "./analysis.js";
 import type { ModelQuantityKind, ModelUnits } from "./model.js";
+import { UNIT_SYSTEM_NAMES } from "./schema-parts.js";
 
 /** The units module's kind of quantity behind each model unit. */
 export const QUANTITY_KIND_OF: { readonly [K in ModelQuantityKind]: QuantityKind } = {
@@ -32,8 +33,8 @@ const SECTION_LENGTH_OF_SYSTEM: Readonly<Record<UnitSystemName, string>> = {
   usKipInch: "in",
 };
 
-/** The units a model gets when its file names none (documented in docs/model-format.md). */
-export const DEFAULT_MODEL_UNITS: ModelUnits = {
+/** The units a model gets when its file names none (documented in docs/model-format.md); frozen. */
+export const DEFAULT_MODEL_UNITS: ModelUnits = Object.freeze({
   length: "m",
   force: "kN",
   moment: "kN*m",
@@ -48,7 +49,7 @@ export const DEFAULT_MODEL_UNITS: ModelUnits = {
   sectionModulus: "mm^3",
   translationalStiffness: "kN/m",
   rotationalStiffness: "kN*m/rad",
-};
+});
 
 // Brackets only where the unit grammar needs them (one "/" per level; a power binds to one symbol).
 const wrap = (unit: string): string => (unit.includes("/") ? `(${unit})` : unit);
@@ -59,9 +60,11 @@ const wrapPower = (unit: string): string => (/[*/\s-]/.test(unit) ? `(${unit})` 
  * `system`, then a unit derived from the base ones (moment = force*length, ...), then the defaults.
  */
 export function resolveUnits(given: Readonly<Record<string, unknown>>): ModelUnits {
-  const system = typeof given["system"] === "string" && given["system"] in unitSystems ? unitSystems[given["system"] as UnitSystemName] : undefined;
+  const name = Object.hasOwn(given, "system") ? given["system"] : undefined;
+  // Own names only: "hasOwnProperty" or "constructor" is not a preset (the schema reports it).
+  const system = (UNIT_SYSTEM_NAMES as readonly unknown[]).includes(name) ? unitSystems[name as UnitSystemName] : undefined;
   const pick = (field: ModelQuantityKind, derived: string): string => {
-    const value = given[field];
+    const value = Object.hasOwn(given, field) ? given[field] : undefined;
     if (typeof value === "string" && value.trim() !== "") return value.trim();
     if (system !== undefined) return field === "sectionLength" ? SECTION_LENGTH_OF_SYSTEM[system.name] : system[field];
     return derived;

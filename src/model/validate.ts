@@ -1,7 +1,6 @@
 // Structural validation of a model file by walking the published JSON Schema itself (the subset of
 // draft 2020-12 that modelSchema uses), so that the schema and our validator cannot drift apart.
-import { describeValue, issue, type FlexuraIssue, type IssuePath } from "../errors/index.js";
-import { closestName } from "./closest.js";
+import { closestName, describeValue, issue, type FlexuraIssue, type IssuePath } from "../errors/index.js";
 import { modelSchema } from "./schema.js";
 import type { SchemaNode } from "./schema-parts.js";
 
@@ -10,10 +9,43 @@ type Json = Readonly<Record<string, unknown>>;
 
 const defs = modelSchema["$defs"] as Readonly<Record<string, SchemaNode>>;
 
+/** True when `name` is an own property of `value`: never a member inherited from Object.prototype. */
+const has = (value: object, name: string): boolean => Object.hasOwn(value, name);
+
+/**
+ * Where issues go. Probing a branch (`if`, `anyOf`) only needs to know whether any issue arises,
+ * so a probe stops at the first one and never builds its message.
+ */
+interface Sink {
+  /** True once anything was reported while probing: the walk can stop. */
+  failed: boolean;
+  /** Records the issue built by `make` (a probe only notes that there was one). */
+  add(make: () => FlexuraIssue): void;
+}
+
+function collector(out: FlexuraIssue[]): Sink {
+  return {
+    failed: false,
+    add(make) {
+      out.push(make());
+    },
+  };
+}
+
+function probe(): Sink {
+  return {
+    failed: false,
+    add() {
+      this.failed = true;
+    },
+  };
+}
+
 function resolve(node: Node): Node | undefined {
   const target = node["$ref"];
   if (typeof target !== "string") return undefined;
-  const found = defs[target.replace("#/$defs/", "")];
+  const name = target.replace("#/$defs/", "");
+  const found = has(defs, name) ? defs[name] : undefined;
   return typeof found === "object" ? found : undefined;
 }
 
@@ -52,39 +84,57 @@ function context(parent: Json | undefined): string {
 }
 
 function isValid(node: SchemaNode, value: unknown): boolean {
-  const out: FlexuraIssue[] = [];
-  walk(node, value, [], out, undefined);
-  return out.length === 0;
+  const sink = probe();
+  walk(node, value, [], sink, undefined);
+  return !sink.failed;
 }
 
-function checkObject(node: Node, value: Json, path: IssuePath, out: FlexuraIssue[]): void {
+/** The value of an own property of `value`, or undefined (inherited members are never read). */
+const ownValue = (value: Json, name: string): unknown => (has(value, name) ? value[name] : undefined);
+
+function checkObject(node: Node, value: Json, path: IssuePath, out: Sink): void {
   const required = (node["required"] as readonly string[] | undefined) ?? [];
   const properties = (node["properties"] as Readonly<Record<string, SchemaNode>> | undefined) ?? {};
-  const what = titleOf(node);
   for (const name of required) {
-    if (!(name in value) || value[name] === undefined) {
-      out.push(issue("missing-field", [...path, name], `Missing "${name}"${what === undefined ? "" : `: ${what} needs it`}.`, { field: name }));
+    if (ownValue(value, name) === undefined) {
+      out.add(() => {
+        const what = titleOf(node);
+        return issue("missing-field", [...path, name], `Missing "${name}"${what === undefined ? "" : `: ${what} needs it`}.`, { field: name });
+      });
+      if (out.failed) return;
     }
   }
-  for (const [name, sub] of Object.entries(properties)) {
-    if (name in value && value[name] !== undefined) walk(sub, value[name], [...path, name], out, value);
+  for (const name of Object.keys(properties)) {
+    const field = ownValue(value, name);
+    if (field !== undefined) walk(properties[name] as SchemaNode, field, [...path, name], out, value);
+    if (out.failed) return;
   }
   // The schema uses additionalProperties only as `false` (closed objects, so typos are caught).
   if (node["additionalProperties"] !== false) return;
   for (const name of Object.keys(value)) {
-    if (name in properties || value[name] === undefined) continue;
-    const near = closestName(name, Object.keys(properties));
-    const hint = near === undefined ? "" : ` Did you mean "${near}"?`;
-    out.push(issue("unknown-field", [...path, name], `Unknown field "${name}"${what === undefined ? "" : ` in ${what}`}.${hint}`, { field: name }));
+    if (has(properties, name) || value[name] === undefined) continue;
+    out.add(() => {
+      const what = titleOf(node);
+      const near = closestName(name, Object.keys(properties));
+      const hint = near === undefined ? "" : ` Did you mean "${near}"?`;
+      return issue("unknown-field", [...path, name], `Unknown field "${name}"${what === undefined ? "" : ` in ${what}`}.${hint}`, { field: name });
+    });
+    if (out.failed) return;
   }
 }
 
-function checkCombinators(node: Node, value: unknown, path: IssuePath, out: FlexuraIssue[], parent: Json | undefined): void {
-  for (const sub of (node["allOf"] as readonly SchemaNode[] | undefined) ?? []) walk(sub, value, path, out, parent);
+function checkCombinators(node: Node, value: unknown, path: IssuePath, out: Sink, parent: Json | undefined): void {
+  for (const sub of (node["allOf"] as readonly SchemaNode[] | undefined) ?? []) {
+    walk(sub, value, path, out, parent);
+    if (out.failed) return;
+  }
   const anyOf = node["anyOf"] as readonly Node[] | undefined;
   if (anyOf !== undefined && !anyOf.some((sub) => isValid(sub, value))) {
-    const names = anyOf.flatMap((sub) => (sub["required"] as readonly string[] | undefined) ?? []);
-    out.push(issue("missing-field", path, `Give ${names.map((n) => `"${n}"`).join(" or ")} (or both)${context(value as Json)}.`, { fields: names }));
+    out.add(() => {
+      const names = anyOf.flatMap((sub) => (sub["required"] as readonly string[] | undefined) ?? []);
+      return issue("missing-field", path, `Give ${names.map((n) => `"${n}"`).join(" or ")} (or both)${context(value as Json)}.`, { fields: names });
+    });
+    if (out.failed) return;
   }
   if (node["if"] !== undefined) {
     const branch = isValid(node["if"] as SchemaNode, value) ? node["then"] : node["else"];
@@ -92,49 +142,65 @@ function checkCombinators(node: Node, value: unknown, path: IssuePath, out: Flex
   }
 }
 
-/** Checks `value` against one schema node, appending an issue for each problem found. */
-function walk(schema: SchemaNode, value: unknown, path: IssuePath, out: FlexuraIssue[], parent: Json | undefined): void {
+/** Checks `value` against one schema node, reporting an issue for each problem found. */
+function walk(schema: SchemaNode, value: unknown, path: IssuePath, out: Sink, parent: Json | undefined): void {
+  if (out.failed) return;
   if (schema === true) return;
   if (schema === false) {
-    out.push(issue("field-not-allowed", path, `The field "${last(path)}" does not apply${context(parent)}; remove it.`, { field: last(path) }));
+    out.add(() => issue("field-not-allowed", path, `The field "${last(path)}" does not apply${context(parent)}; remove it.`, { field: last(path) }));
     return;
   }
   const node = schema;
   const target = resolve(node);
   if (target !== undefined) walk(target, value, path, out, parent);
+  if (out.failed) return;
   if (node["type"] !== undefined && !typeMatches(value, node["type"])) {
-    out.push(issue("wrong-type", path, `Expected ${expected(node)}; got ${describeValue(value)}.`, { expected: node["type"], value: describeValue(value) }));
+    out.add(() => issue("wrong-type", path, `Expected ${expected(node)}; got ${describeValue(value)}.`, { expected: node["type"], value: describeValue(value) }));
     return;
   }
   if (node["type"] !== undefined && typeof value === "number" && !Number.isFinite(value)) {
-    out.push(issue("not-finite", path, `Expected a finite number; got ${String(value)}.`, { value: String(value) }));
+    out.add(() => issue("not-finite", path, `Expected a finite number; got ${String(value)}.`, { value: String(value) }));
   }
-  if ("const" in node && value !== node["const"]) {
-    out.push(issue("not-an-option", path, `Expected ${JSON.stringify(node["const"])}; got ${describeValue(value)}.`, { value: describeValue(value) }));
+  if (has(node, "const") && value !== node["const"]) {
+    out.add(() => issue("not-an-option", path, `Expected ${JSON.stringify(node["const"])}; got ${describeValue(value)}.`, { value: describeValue(value) }));
   }
   const options = node["enum"] as readonly unknown[] | undefined;
   if (options !== undefined && !options.includes(value)) {
-    out.push(
+    out.add(() =>
       issue("not-an-option", path, `Expected one of ${options.map((o) => JSON.stringify(o)).join(", ")}; got ${describeValue(value)}.`, {
         value: describeValue(value),
         options,
       }),
     );
   }
-  const minLength = node["minLength"];
-  if (typeof minLength === "number" && typeof value === "string" && [...value].length < minLength) {
-    out.push(issue("empty-string", path, `"${last(path)}" must not be empty.`));
-  }
+  if (typeof value === "string") checkString(node, value, path, out);
+  if (out.failed) return;
   if (Array.isArray(value)) {
     const minItems = node["minItems"];
     if (typeof minItems === "number" && value.length < minItems) {
-      out.push(issue("too-few-items", path, `Give at least ${minItems} item${minItems === 1 ? "" : "s"} in "${last(path)}".`, { minItems }));
+      out.add(() => issue("too-few-items", path, `Give at least ${minItems} item${minItems === 1 ? "" : "s"} in "${last(path)}".`, { minItems }));
     }
     const items = node["items"] as SchemaNode | undefined;
-    if (items !== undefined) value.forEach((item, i) => walk(items, item, [...path, i], out, undefined));
+    if (items !== undefined) {
+      for (let i = 0; i < value.length && !out.failed; i++) walk(items, value[i] as unknown, [...path, i], out, undefined);
+    }
   }
   if (typeOf(value) === "object") checkObject(node, value as Json, path, out);
+  if (out.failed) return;
   checkCombinators(node, value, path, out, parent);
+}
+
+/** `minLength` (counted in code points) and `pattern` (the schema uses only "\\S": not blank). */
+function checkString(node: Node, value: string, path: IssuePath, out: Sink): void {
+  const minLength = node["minLength"];
+  if (typeof minLength === "number" && [...value].length < minLength) {
+    out.add(() => issue("empty-string", path, `"${last(path)}" must not be empty.`));
+    return;
+  }
+  const pattern = node["pattern"];
+  if (typeof pattern === "string" && !new RegExp(pattern, "u").test(value)) {
+    out.add(() => issue("empty-string", path, `"${last(path)}" must not be blank (only spaces or tabs); write a value or leave the field out.`, { value }));
+  }
 }
 
 /**
@@ -143,7 +209,7 @@ function walk(schema: SchemaNode, value: unknown, path: IssuePath, out: FlexuraI
  */
 export function structuralIssues(json: unknown): readonly FlexuraIssue[] {
   const out: FlexuraIssue[] = [];
-  walk(modelSchema, json, [], out, undefined);
+  walk(modelSchema, json, [], collector(out), undefined);
   return out.map((i) =>
     i.code === "not-an-option" && i.path.length === 1 && i.path[0] === "format"
       ? { ...i, code: "unsupported-format", message: `This release reads model format 1; got ${String(i["value"])}. Update flexura or set "format": 1.` }

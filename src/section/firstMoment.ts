@@ -68,6 +68,8 @@ export function firstMomentAbove(section: Section, yCut: number, options?: Secti
   whole.fill(0);
   let widthAbove = 0;
   let widthBelow = 0;
+  // heights within this of a corner count as the corner (see chordAt): far above rounding, far below any real dimension
+  const near = 1e-12 * (p.box[3]! - p.box[2]!);
   for (let i = 0; i < p.count; i++) {
     const from = p.edgeStart[i]!;
     const to = p.edgeStart[i + 1]!;
@@ -76,15 +78,17 @@ export function firstMomentAbove(section: Section, yCut: number, options?: Secti
     whole[M_Y]! += w * p.partMoments[i * 6 + M_Y]!;
     const yMin = p.partBox[i * 4 + 2]!;
     const yMax = p.partBox[i * 4 + 3]!;
+    if (cut >= yMin - near && cut <= yMax + near) {
+      const s = p.sign[i]!;
+      widthAbove += s * chordAt(p.edges, from, to, cut, true, near);
+      widthBelow += s * chordAt(p.edges, from, to, cut, false, near);
+    }
     if (cut < yMin) {
       above[M_AREA]! += w * p.partMoments[i * 6 + M_AREA]!;
       above[M_Y]! += w * p.partMoments[i * 6 + M_Y]!;
       continue;
     }
     if (cut > yMax) continue;
-    const s = p.sign[i]!;
-    widthAbove += s * chordAt(p.edges, from, to, cut, true);
-    widthBelow += s * chordAt(p.edges, from, to, cut, false);
     if (cut < yMax) addMomentsAbove(above, p.edges, from, to, w, cut);
   }
   const yc = whole[M_Y]! / whole[M_AREA]!;

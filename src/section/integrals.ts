@@ -134,9 +134,14 @@ export function addMomentsAbove(out: Float64Array, edges: Float64Array, from: nu
 /**
  * Signed chord length of the region bounded by edges [from, to) along the line y = cut, in
  * the limit from above (`fromAbove` true: the line y = cut + epsilon) or from below. Each
- * crossing adds z where the boundary goes up and subtracts z where it goes down.
+ * crossing adds z where the boundary goes up and subtracts z where it goes down. The edges
+ * crossed are those that span the height `near` above (or below) the cut: a corner where a
+ * straight edge meets an arc is computed twice (once from the arc's angles), and the two can
+ * differ by a rounding; with `near` well above that rounding, a cut through such a corner
+ * still meets one edge on each side of it, never both or neither.
  */
-export function chordAt(edges: Float64Array, from: number, to: number, cut: number, fromAbove: boolean): number {
+export function chordAt(edges: Float64Array, from: number, to: number, cut: number, fromAbove: boolean, near = 0): number {
+  const probe = fromAbove ? cut + near : cut - near;
   let sum = 0;
   for (let e = from; e < to; e++) {
     const o = e * STRIDE;
@@ -153,7 +158,7 @@ export function chordAt(edges: Float64Array, from: number, to: number, cut: numb
     }
     const lo = ya < yb ? ya : yb;
     const hi = ya < yb ? yb : ya;
-    const inside = fromAbove ? lo <= cut && cut < hi : lo < cut && cut <= hi;
+    const inside = fromAbove ? lo <= probe && probe < hi : lo < probe && probe <= hi;
     if (!inside) continue;
     let z: number;
     if (edges[o] === ARC) {

@@ -1,5 +1,5 @@
 // Checks one part's data: types, finite numbers, positive sizes, simple polygons.
-import { describeValue, requireFinite, type IssueCollector, type IssuePath } from "../errors/index.js";
+import { describeValue, requireFinite, unknownKeyHint, type IssueCollector, type IssuePath } from "../errors/index.js";
 import { normalisedPolygon, polygonArea } from "./edges.js";
 import { findSelfIntersection } from "./polygonCheck.js";
 
@@ -12,7 +12,8 @@ function isFiniteNumber(value: unknown): value is number {
 }
 
 // The checks take the parent path and the key, and build the field's path only for a report.
-function checkPoint(found: IssueCollector, value: unknown, parent: IssuePath, key: string | number, what: string): boolean {
+/** Records a problem with a point `{ y, z }` of finite numbers at `parent[key]`; true when it is fine. */
+export function checkPoint(found: IssueCollector, value: unknown, parent: IssuePath, key: string | number, what: string): boolean {
   if (isObject(value) && isFiniteNumber(value["y"]) && isFiniteNumber(value["z"])) return true;
   const path = [...parent, key];
   if (!isObject(value)) {
@@ -39,6 +40,7 @@ function checkMaterial(found: IssueCollector, value: unknown, parent: IssuePath)
     found.add("material-invalid", path, `The material must be an object { elasticModulus }; got ${describeValue(value)}.`);
     return;
   }
+  checkFields(found, value, MATERIAL_FIELDS, path, "material");
   checkPositive(found, value["elasticModulus"], path, "elasticModulus", "elastic modulus", "elastic-modulus-not-positive");
   if (value["yieldStrength"] !== undefined) {
     checkPositive(found, value["yieldStrength"], path, "yieldStrength", "yield strength", "yield-strength-not-positive");
@@ -114,6 +116,21 @@ function checkPolygon(found: IssueCollector, part: Record<string, unknown>, path
   }
 }
 
+/** The fields each kind of part has (a misspelt field would otherwise be ignored). */
+const FIELDS: Readonly<Record<string, readonly string[]>> = {
+  polygon: ["kind", "points", "hole", "material"],
+  circle: ["kind", "centre", "radius", "hole", "material"],
+  sector: ["kind", "centre", "radius", "startAngle", "sweep", "hole", "material"],
+  fillet: ["kind", "corner", "radius", "orientation", "hole", "material"],
+};
+const MATERIAL_FIELDS = ["name", "elasticModulus", "yieldStrength"];
+
+function checkFields(found: IssueCollector, value: Record<string, unknown>, known: readonly string[], path: IssuePath, what: string): void {
+  for (const key of Object.keys(value)) {
+    if (!known.includes(key)) found.add("unknown-field", [...path, key], `Unknown ${what} field "${key}".${unknownKeyHint(key, known)}`, { field: key });
+  }
+}
+
 /** Records every problem with one part's data; true when the part is usable. */
 export function validatePart(found: IssueCollector, part: unknown, path: IssuePath): boolean {
   const before = found.issues.length;
@@ -127,6 +144,7 @@ export function validatePart(found: IssueCollector, part: unknown, path: IssuePa
   }
   checkMaterial(found, part["material"], path);
   const kind = part["kind"];
+  if (typeof kind === "string" && Object.hasOwn(FIELDS, kind)) checkFields(found, part, FIELDS[kind]!, path, `${kind} part`);
   switch (kind) {
     case "polygon":
       checkPolygon(found, part, path);

@@ -255,8 +255,8 @@ describe("check errors", () => {
     const bad = tryMemberStresses(solution, { properties: { secondMomentZ: 1e6, extremes: { top: 10, bottom: -10 } }, shear: [] });
     expect(bad.ok || bad.error.issues.map((i) => `${i.code} ${i.path.join(".")}`)).toEqual(["no-bands sections.shear"]);
     expect(tryMemberStresses(solution, []).ok).toBe(false);
-    const noLimits = checkMember(solution, { properties: { secondMomentZ: 1e6, extremes: { top: 10, bottom: -10 } } }, {});
-    expect(noLimits.governing).toBeNull();
-    expect(noLimits.pass).toBe(true);
+    // No limits: no verdict (never a pass by default).
+    const noLimits = tryCheckMember(solution, { properties: { secondMomentZ: 1e6, extremes: { top: 10, bottom: -10 } } }, {});
+    expect(noLimits.ok || noLimits.error.code).toBe("limits-empty");
   });
 });

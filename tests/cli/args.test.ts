@@ -10,8 +10,8 @@ describe("parseCommandLine", () => {
     expect(parseCommandLine(["check", "a.json", "--json"])).toEqual({ kind: "check", files: ["a.json"], json: true });
     expect(parseCommandLine(["schema"])).toEqual({ kind: "schema" });
   });
-  test("parseCommandLine gives help for no arguments, --help, -h and help, per command too", () => {
-    expect(parseCommandLine([])).toEqual({ kind: "help", topic: "main" });
+  test("parseCommandLine gives usage for no arguments, help for --help, -h and help, per command too", () => {
+    expect(parseCommandLine([])).toEqual({ kind: "usage-error", message: "Give a command: analyze, check or schema.", topic: "main" });
     expect(parseCommandLine(["--help"])).toEqual({ kind: "help", topic: "main" });
     expect(parseCommandLine(["help"])).toEqual({ kind: "help", topic: "main" });
     expect(parseCommandLine(["analyze", "--help"])).toEqual({ kind: "help", topic: "analyze" });
@@ -24,10 +24,14 @@ describe("parseCommandLine", () => {
     expect(parseCommandLine(["analyse", "b.json"])).toMatchInlineSnapshot(`
       {
         "kind": "usage-error",
-        "message": "Unknown command "analyse". The commands are: analyze, check, schema.",
+        "message": "Unknown command "analyse". Did you mean "analyze"? The commands are: analyze, check, schema.",
         "topic": "main",
       }
     `);
+    expect(parseCommandLine(["chek", "b.json"])).toMatchObject({ message: 'Unknown command "chek". Did you mean "check"? The commands are: analyze, check, schema.' });
+    expect(parseCommandLine(["report", "b.json"])).toMatchObject({ message: 'Unknown command "report". The commands are: analyze, check, schema.' });
+    expect(parseCommandLine(["check", "-", "--json"])).toEqual({ kind: "check", files: ["-"], json: true });
+    expect(parseCommandLine(["analyze", "-"])).toEqual({ kind: "analyze", file: "-", json: false, svg: undefined });
     expect(parseCommandLine(["--frobnicate"])).toMatchObject({ kind: "usage-error", message: 'Unknown option "--frobnicate". The commands are: analyze, check, schema.' });
     expect(parseCommandLine(["--version", "x"])).toMatchObject({ kind: "usage-error", topic: "main" });
     expect(parseCommandLine(["analyze"])).toMatchObject({ kind: "usage-error", topic: "analyze" });

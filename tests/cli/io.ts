@@ -1,6 +1,6 @@
 // A CliIo that keeps everything in memory, for driving runCli in tests.
 import { readFileSync } from "node:fs";
-import type { CliIo } from "../../src/cli/run.js";
+import type { CliIo } from "../../src/cli/io.js";
 
 export interface MemoryIo extends CliIo {
   readonly out: string[];
@@ -9,7 +9,7 @@ export interface MemoryIo extends CliIo {
 }
 
 /** Reads real files (the fixtures) unless `files` supplies the text; writes go to memory. */
-export function memoryIo(files: Readonly<Record<string, string>> = {}): MemoryIo {
+export function memoryIo(files: Readonly<Record<string, string>> = {}, stdin = ""): MemoryIo {
   const out: string[] = [];
   const err: string[] = [];
   const written = new Map<string, string>();
@@ -17,7 +17,8 @@ export function memoryIo(files: Readonly<Record<string, string>> = {}): MemoryIo
     out,
     err,
     written,
-    readText: (path) => files[path] ?? readFileSync(path, "utf8"),
+    readText: (path) => (Object.hasOwn(files, path) ? files[path]! : readFileSync(path, "utf8")),
+    readStdin: () => stdin,
     writeText: (folder, name, text) => {
       const file = `${folder}/${name}`;
       written.set(file, text);

@@ -1,7 +1,7 @@
 import { attempt, type Result } from "../../errors/index.js";
 import { section } from "../construct.js";
 import type { Section, SectionPart } from "../types.js";
-import { box, checkDimensions, withExtras, type ShapeOptions } from "./dimensions.js";
+import { box, checkDimensions, checkShapeOptions, withExtras, type ShapeOptions } from "./dimensions.js";
 
 /**
  * Dimensions of an angle (L-section), equal or unequal legs.
@@ -30,7 +30,7 @@ export interface AngleDimensions {
  *
  * @param dims - {@link AngleDimensions}.
  * @param options - {@link ShapeOptions}.
- * @throws FlexuraError `dimension-not-positive`, `dimension-negative`, `thickness-too-large`,
+ * @throws FlexuraError `unknown-field` (a misspelt dimension or option, with the closest name suggested), `options-invalid`, `dimension-not-positive`, `dimension-negative`, `thickness-too-large`,
  *   `root-radius-too-large`, `not-a-number`, `not-finite`.
  * @example
  * ```ts
@@ -40,6 +40,7 @@ export interface AngleDimensions {
  */
 export function angle(dims: AngleDimensions, options?: ShapeOptions): Section {
   const { found, ok } = checkDimensions(dims, ["verticalLeg", "thickness"], ["rootRadius"], ["horizontalLeg"]);
+  checkShapeOptions(found, options);
   if (!ok) found.throwIfAny();
   const h = dims.verticalLeg;
   const w = dims.horizontalLeg ?? h;

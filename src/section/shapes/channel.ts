@@ -1,7 +1,7 @@
 import { attempt, type Result } from "../../errors/index.js";
 import { section } from "../construct.js";
 import type { Section, SectionPart } from "../types.js";
-import { box, checkDimensions, withExtras, type ShapeOptions } from "./dimensions.js";
+import { box, checkDimensions, checkShapeOptions, withExtras, type ShapeOptions } from "./dimensions.js";
 
 /**
  * Dimensions of a channel with parallel flanges.
@@ -31,7 +31,7 @@ export interface ChannelDimensions {
  *
  * @param dims - {@link ChannelDimensions}.
  * @param options - {@link ShapeOptions}.
- * @throws FlexuraError `dimension-not-positive`, `dimension-negative`, `flange-too-thick`,
+ * @throws FlexuraError `unknown-field` (a misspelt dimension or option, with the closest name suggested), `options-invalid`, `dimension-not-positive`, `dimension-negative`, `flange-too-thick`,
  *   `web-too-thick`, `root-radius-too-large`, `not-a-number`, `not-finite`.
  * @example
  * ```ts
@@ -41,6 +41,7 @@ export interface ChannelDimensions {
  */
 export function channel(dims: ChannelDimensions, options?: ShapeOptions): Section {
   const { found, ok } = checkDimensions(dims, ["depth", "flangeWidth", "flangeThickness", "webThickness"], ["rootRadius"]);
+  checkShapeOptions(found, options);
   if (!ok) found.throwIfAny();
   const { depth: d, flangeWidth: b, flangeThickness: tf, webThickness: tw } = dims;
   const r = dims.rootRadius ?? 0;

@@ -1,7 +1,7 @@
 import { attempt, type Result } from "../../errors/index.js";
 import { section } from "../construct.js";
 import type { Section } from "../types.js";
-import { checkDimensions, withExtras, type ShapeOptions } from "./dimensions.js";
+import { checkDimensions, checkShapeOptions, withExtras, type ShapeOptions } from "./dimensions.js";
 
 /**
  * Dimensions of a solid circle (a round bar).
@@ -36,7 +36,7 @@ export interface PipeDimensions {
  *
  * @param dims - {@link CircleDimensions}.
  * @param options - {@link ShapeOptions}.
- * @throws FlexuraError `dimension-not-positive`, `not-a-number`, `not-finite`.
+ * @throws FlexuraError `unknown-field` (a misspelt dimension or option, with the closest name suggested), `options-invalid`, `dimension-not-positive`, `not-a-number`, `not-finite`.
  * @example
  * ```ts
  * sectionProperties(circle({ diameter: 50 })).secondMomentZ; // pi d^4 / 64
@@ -44,6 +44,7 @@ export interface PipeDimensions {
  */
 export function circle(dims: CircleDimensions, options?: ShapeOptions): Section {
   const { found } = checkDimensions(dims, ["diameter"]);
+  checkShapeOptions(found, options);
   found.throwIfAny();
   return section([withExtras({ kind: "circle", centre: { y: 0, z: 0 }, radius: dims.diameter / 2 }, options?.material)]);
 }
@@ -53,7 +54,7 @@ export function circle(dims: CircleDimensions, options?: ShapeOptions): Section 
  *
  * @param dims - {@link PipeDimensions}.
  * @param options - {@link ShapeOptions}.
- * @throws FlexuraError `dimension-not-positive`, `wall-too-thick` (wall at least half the
+ * @throws FlexuraError `unknown-field` (a misspelt dimension or option, with the closest name suggested), `options-invalid`, `dimension-not-positive`, `wall-too-thick` (wall at least half the
  *   diameter: use {@link circle}), `not-a-number`, `not-finite`.
  * @example
  * ```ts
@@ -62,6 +63,7 @@ export function circle(dims: CircleDimensions, options?: ShapeOptions): Section 
  */
 export function pipe(dims: PipeDimensions, options?: ShapeOptions): Section {
   const { found, ok } = checkDimensions(dims, ["outsideDiameter", "wallThickness"]);
+  checkShapeOptions(found, options);
   if (!ok) found.throwIfAny();
   if (dims.wallThickness * 2 >= dims.outsideDiameter) {
     found.add("wall-too-thick", ["wallThickness"], `The wall must be thinner than half the diameter; for a solid bar use circle().`, {

@@ -1,5 +1,5 @@
 // Shared checks and builders for the parametric shapes.
-import { IssueCollector, describeValue, requireFinite } from "../../errors/index.js";
+import { IssueCollector, describeValue, requireFinite, unknownKeyHint } from "../../errors/index.js";
 import type { Material, PolygonPart, SectionPart, SectionPoint } from "../types.js";
 
 /** Options common to every shape function. */
@@ -9,8 +9,34 @@ export interface ShapeOptions {
 }
 
 /**
+ * Records `unknown-field` for each own key of `value` that is not in `known` (a misspelt name
+ * would otherwise be ignored and its default used), with the closest known name suggested.
+ * Returns true when every key is known.
+ */
+export function checkKnownKeys(found: IssueCollector, value: Readonly<Record<string, unknown>>, known: readonly string[], path: readonly (string | number)[], what: string): boolean {
+  let ok = true;
+  for (const key of Object.keys(value)) {
+    if (known.includes(key)) continue;
+    found.add("unknown-field", [...path, key], `Unknown ${what} "${key}".${unknownKeyHint(key, known)}`, { field: key });
+    ok = false;
+  }
+  return ok;
+}
+
+/** Records a problem with a shape's options: not an object, or a key other than `material`. */
+export function checkShapeOptions(found: IssueCollector, options: unknown): void {
+  if (options === undefined) return;
+  if (typeof options !== "object" || options === null || Array.isArray(options)) {
+    found.add("options-invalid", ["options"], `The options must be an object { material }; got ${describeValue(options)}.`);
+    return;
+  }
+  checkKnownKeys(found, options as Record<string, unknown>, ["material"], ["options"], "option");
+}
+
+/**
  * Checks that each named field of `dims` is a finite number > 0 (required), absent or >= 0
- * (`optional`), or absent or > 0 (`positiveIfGiven`). Returns the collector for further checks.
+ * (`optional`), or absent or > 0 (`positiveIfGiven`), and that no other key is given (`unknown-field`, with the closest name
+ * suggested). Returns the collector for further checks.
  */
 export function checkDimensions(
   dims: unknown,
@@ -24,7 +50,7 @@ export function checkDimensions(
     return { found, ok: false };
   }
   const d = dims as Record<string, unknown>;
-  let ok = true;
+  let ok = checkKnownKeys(found, d, [...required, ...optional, ...positiveIfGiven], [], "dimension");
   for (const name of [...required, ...positiveIfGiven]) {
     const v = d[name];
     if (v === undefined && !required.includes(name)) continue;

@@ -1,7 +1,7 @@
 import { attempt, type Result } from "../../errors/index.js";
 import { section } from "../construct.js";
 import type { Material, Section, SectionPart } from "../types.js";
-import { box, checkDimensions, withExtras, type ShapeOptions } from "./dimensions.js";
+import { box, checkDimensions, checkShapeOptions, withExtras, type ShapeOptions } from "./dimensions.js";
 
 /**
  * Dimensions of an I-section (rolled or welded), in the words of steel tables.
@@ -57,7 +57,7 @@ export function rootFillets(
  *
  * @param dims - {@link ISectionDimensions}.
  * @param options - {@link ShapeOptions}.
- * @throws FlexuraError `dimension-not-positive`, `dimension-negative`, `flange-too-thick`
+ * @throws FlexuraError `unknown-field` (a misspelt dimension or option, with the closest name suggested), `options-invalid`, `dimension-not-positive`, `dimension-negative`, `flange-too-thick`
  *   (flanges together at least the depth), `web-too-thick` (web wider than a flange),
  *   `root-radius-too-large` (fillets do not fit between web, flange tips and the other flange),
  *   `not-a-number`, `not-finite`.
@@ -69,6 +69,7 @@ export function rootFillets(
  */
 export function iSection(dims: ISectionDimensions, options?: ShapeOptions): Section {
   const { found, ok } = checkDimensions(dims, ["depth", "flangeWidth", "flangeThickness", "webThickness"], ["rootRadius"], ["bottomFlangeWidth", "bottomFlangeThickness"]);
+  checkShapeOptions(found, options);
   if (!ok) found.throwIfAny();
   const d = dims.depth;
   const bt = dims.flangeWidth;

@@ -1,7 +1,7 @@
 import { IssueCollector, attempt, type Result } from "../../errors/index.js";
 import { section } from "../construct.js";
 import type { Section } from "../types.js";
-import { box, checkDimensions, type ShapeOptions } from "./dimensions.js";
+import { box, checkDimensions, checkKnownKeys, checkShapeOptions, type ShapeOptions } from "./dimensions.js";
 
 /**
  * One plate of a plate girder.
@@ -42,7 +42,7 @@ export interface PlateGirderDimensions {
  *
  * @param dims - {@link PlateGirderDimensions}.
  * @param options - {@link ShapeOptions}.
- * @throws FlexuraError `dimension-not-positive`, `web-too-thick`, `dimensions-invalid`,
+ * @throws FlexuraError `unknown-field` (a misspelt dimension or option, with the closest name suggested), `options-invalid`, `dimension-not-positive`, `web-too-thick`, `dimensions-invalid`,
  *   `not-a-number`, `not-finite` (paths such as `topFlange.width`).
  * @example
  * ```ts
@@ -57,10 +57,13 @@ export function plateGirder(dims: PlateGirderDimensions, options?: ShapeOptions)
     found.addAll(r.found.issues, [name]);
     return r.ok;
   };
+  if (typeof dims === "object" && dims !== null) checkKnownKeys(found, dims as unknown as Record<string, unknown>, ["topFlange", "web", "bottomFlange"], [], "dimension");
+  checkShapeOptions(found, options);
   const okTop = plate(dims?.topFlange, "topFlange");
   const okWeb = plate(dims?.web, "web");
   const okBottom = dims?.bottomFlange === undefined || plate(dims.bottomFlange, "bottomFlange");
   if (!(okTop && okWeb && okBottom)) found.throwIfAny();
+  found.throwIfAny();
   const top = dims.topFlange;
   const web = dims.web;
   const bottom = dims.bottomFlange ?? top;

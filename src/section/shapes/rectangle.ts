@@ -1,7 +1,7 @@
 import { attempt, type Result } from "../../errors/index.js";
 import { section } from "../construct.js";
 import type { Section } from "../types.js";
-import { box, checkDimensions, type ShapeOptions } from "./dimensions.js";
+import { box, checkDimensions, checkShapeOptions, type ShapeOptions } from "./dimensions.js";
 
 /**
  * Dimensions of a solid rectangle.
@@ -24,7 +24,7 @@ export interface RectangleDimensions {
  *
  * @param dims - {@link RectangleDimensions}.
  * @param options - {@link ShapeOptions} (a material for the part).
- * @throws FlexuraError `dimension-not-positive`, `not-a-number`, `not-finite`.
+ * @throws FlexuraError `unknown-field` (a misspelt dimension or option, with the closest name suggested), `options-invalid`, `dimension-not-positive`, `not-a-number`, `not-finite`.
  * @example
  * ```ts
  * const joist = rectangle({ width: 45, depth: 240 });
@@ -33,6 +33,7 @@ export interface RectangleDimensions {
  */
 export function rectangle(dims: RectangleDimensions, options?: ShapeOptions): Section {
   const { found } = checkDimensions(dims, ["width", "depth"]);
+  checkShapeOptions(found, options);
   found.throwIfAny();
   const { width: b, depth: d } = dims;
   return section([box(-b / 2, b / 2, -d / 2, d / 2, options?.material)]);

@@ -2,7 +2,7 @@ import { attempt, type Result } from "../../errors/index.js";
 import { section } from "../construct.js";
 import type { Section } from "../types.js";
 import { cornerFillets } from "./corners.js";
-import { box, checkDimensions, type ShapeOptions } from "./dimensions.js";
+import { box, checkDimensions, checkShapeOptions, type ShapeOptions } from "./dimensions.js";
 
 /**
  * Dimensions of a rectangular (or square) hollow section.
@@ -32,7 +32,7 @@ export interface RectangularHollowDimensions {
  *
  * @param dims - {@link RectangularHollowDimensions}.
  * @param options - {@link ShapeOptions}.
- * @throws FlexuraError `dimension-not-positive`, `dimension-negative`, `wall-too-thick`,
+ * @throws FlexuraError `unknown-field` (a misspelt dimension or option, with the closest name suggested), `options-invalid`, `dimension-not-positive`, `dimension-negative`, `wall-too-thick`,
  *   `corner-radius-too-large`, `not-a-number`, `not-finite`.
  * @example
  * ```ts
@@ -42,6 +42,7 @@ export interface RectangularHollowDimensions {
  */
 export function rectangularHollow(dims: RectangularHollowDimensions, options?: ShapeOptions): Section {
   const { found, ok } = checkDimensions(dims, ["width", "depth", "wallThickness"], ["cornerRadius", "innerCornerRadius"]);
+  checkShapeOptions(found, options);
   if (!ok) found.throwIfAny();
   const { width: b, depth: d, wallThickness: t } = dims;
   const ro = dims.cornerRadius ?? 0;

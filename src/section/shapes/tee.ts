@@ -1,7 +1,7 @@
 import { attempt, type Result } from "../../errors/index.js";
 import { section } from "../construct.js";
 import type { Section } from "../types.js";
-import { box, checkDimensions, type ShapeOptions } from "./dimensions.js";
+import { box, checkDimensions, checkShapeOptions, type ShapeOptions } from "./dimensions.js";
 import { rootFillets } from "./iSection.js";
 
 /**
@@ -32,7 +32,7 @@ export interface TeeDimensions {
  *
  * @param dims - {@link TeeDimensions}.
  * @param options - {@link ShapeOptions}.
- * @throws FlexuraError `dimension-not-positive`, `dimension-negative`, `flange-too-thick`,
+ * @throws FlexuraError `unknown-field` (a misspelt dimension or option, with the closest name suggested), `options-invalid`, `dimension-not-positive`, `dimension-negative`, `flange-too-thick`,
  *   `web-too-thick`, `root-radius-too-large`, `not-a-number`, `not-finite`.
  * @example
  * ```ts
@@ -42,6 +42,7 @@ export interface TeeDimensions {
  */
 export function tee(dims: TeeDimensions, options?: ShapeOptions): Section {
   const { found, ok } = checkDimensions(dims, ["depth", "flangeWidth", "flangeThickness", "webThickness"], ["rootRadius"]);
+  checkShapeOptions(found, options);
   if (!ok) found.throwIfAny();
   const { depth: d, flangeWidth: b, flangeThickness: tf, webThickness: tw } = dims;
   const r = dims.rootRadius ?? 0;

@@ -1,0 +1,128 @@
+import { describe, expect, it } from "vitest";
+import { formatPath } from "../../src/errors/index.js";
+import { analyzeModel, DEFAULT_MODEL_UNITS, modelSchema, parseModel, tryAnalyzeModel, tryParseModel } from "../../src/model/index.js";
+
+// An invented simple span: 6 m, E = 200 GPa, I = 8.5e7 mm^4, 10 kN at midspan.
+const base = (): Record<string, unknown> => ({
+  length: 6,
+  E: "200 GPa",
+  I: "8.5e7 mm^4",
+  supports: [{ at: 0, type: "pin" }, { at: 6, type: "roller" }],
+  loads: [{ type: "point", at: 3, value: 10 }],
+});
+
+function problems(json: unknown): string[] {
+  const r = tryParseModel(json);
+  return r.ok ? [] : r.error.issues.map((i) => `${formatPath(i.path)} [${i.code}]`);
+}
+
+describe("keys named after Object.prototype members", () => {
+  it("__proto__, constructor and prototype are unknown fields like any other unknown key, at every depth", () => {
+    const text = JSON.stringify(base()).replace(/^\{/, '{"__proto__":{"x":1},"constructor":1,"prototype":2,');
+    const json = JSON.parse(text.replace('{"at":0,"type":"pin"}', '{"at":0,"type":"pin","__proto__":{},"constructor":"x"}')) as unknown;
+    expect(problems(json).sort()).toEqual([
+      "__proto__ [unknown-field]",
+      "constructor [unknown-field]",
+      "prototype [unknown-field]",
+      "supports[0].__proto__ [unknown-field]",
+      "supports[0].constructor [unknown-field]",
+    ]);
+  });
+
+  it("the same keys inside units, loads, limits and sections are unknown fields", () => {
+    const json = JSON.parse(
+      JSON.stringify({
+        ...base(),
+        units: { toString: "m" },
+        loads: [{ type: "point", at: 3, value: 10, hasOwnProperty: 1 }],
+        limits: { valueOf: 1 },
+        section: { shape: "rectangle", width: 100, depth: 200, constructor: 1 },
+        I: undefined,
+      }),
+    ) as unknown;
+    expect(problems(json).sort()).toEqual(["limits.valueOf [unknown-field]", "loads[0].hasOwnProperty [unknown-field]", "section.constructor [unknown-field]", "units.toString [unknown-field]"]);
+  });
+
+  it("a required field is not found on the prototype", () => {
+    const inherited = Object.create({ length: 6 }) as Record<string, unknown>;
+    Object.assign(inherited, { E: "200 GPa", I: "8.5e7 mm^4", supports: [{ at: 0, type: "fixed" }] });
+    expect(problems(inherited)).toEqual(["length [missing-field]"]);
+  });
+
+  it("a load case named constructor (or __proto__) is a label like any other, with factor 1", () => {
+    for (const name of ["constructor", "__proto__", "hasOwnProperty", "toString"]) {
+      const a = analyzeModel(parseModel({ ...base(), loads: [{ type: "point", at: 3, value: 10, case: name }] }));
+      // Simple span, central point load: each reaction P / 2 (common practice).
+      expect(a.reactions.map((r) => r.force)).toEqual([5, 5].map((v) => expect.closeTo(v, 12) as unknown as number));
+      expect(a.model.loads[0]?.case).toBe(name);
+    }
+  });
+});
+
+describe("units", () => {
+  it("a unit-system name that is an Object.prototype member is not an option (typed, not a TypeError)", () => {
+    for (const system of ["hasOwnProperty", "constructor", "__proto__", "toString"]) {
+      expect(problems({ ...base(), units: { system } })).toEqual(["units.system [not-an-option]"]);
+    }
+  });
+
+  it("blank unit strings (a tab, two spaces) are refused, not replaced by the default", () => {
+    expect(problems({ ...base(), units: { length: "\t", force: "  " } })).toEqual(["units.length [empty-string]", "units.force [empty-string]"]);
+    expect(problems({ ...base(), units: { stress: "" } })).toEqual(["units.stress [empty-string]"]);
+  });
+
+  it("the published schema says the same: unit fields must hold a non-blank character", () => {
+    const units = (modelSchema["$defs"] as Record<string, { properties: Record<string, { pattern?: string }> }>)["units"];
+    expect(units?.properties["length"]?.pattern).toBe("\\S");
+  });
+});
+
+describe("limits", () => {
+  it("a deflection limit of span/1e999 (an infinite divisor) is refused, not dropped", () => {
+    expect(problems({ ...base(), limits: { deflection: "span/1e999" } })).toEqual(["limits.deflection [not-finite]"]);
+    expect(problems({ ...base(), limits: { deflection: "L/0" } })).toEqual(["limits.deflection [value-not-positive]"]);
+  });
+});
+
+describe("exported constants cannot be changed", () => {
+  it("modelSchema is frozen all the way down, and parseModel is unaffected by attempts to change it", () => {
+    const defs = modelSchema["$defs"] as Record<string, { properties: { type: { enum: string[] } } }>;
+    expect(Object.isFrozen(modelSchema)).toBe(true);
+    expect(() => {
+      (modelSchema as Record<string, unknown>)["title"] = "x";
+    }).toThrowError(TypeError);
+    expect(() => defs["support"]?.properties.type.enum.push("hovering")).toThrowError(TypeError);
+    expect(problems({ ...base(), supports: [{ at: 0, type: "hovering" }] })).toEqual(["supports[0].type [not-an-option]"]);
+  });
+
+  it("DEFAULT_MODEL_UNITS is frozen, and models still read in metres by default", () => {
+    expect(Object.isFrozen(DEFAULT_MODEL_UNITS)).toBe(true);
+    expect(() => {
+      (DEFAULT_MODEL_UNITS as { length: string }).length = "ft";
+    }).toThrowError(TypeError);
+    expect(parseModel(base()).units.length).toBe("m");
+  });
+});
+
+describe("results that are not finite are refused", () => {
+  it("a settlement alone gives no imbalance warning and finite results", () => {
+    const a = analyzeModel(parseModel({ ...base(), loads: [], supports: [{ at: 0, type: "pin" }, { at: 3, type: "roller", settlement: 5 }, { at: 6, type: "roller" }] }));
+    expect(a.warnings).toEqual([]);
+    expect(Number.isFinite(a.deflection.min.value)).toBe(true);
+    // Two equal spans, middle support settling delta: R_middle = -48 E I delta / L^3 (L = 6 m total; common practice).
+    const EI = 200e6 * 8.5e-5; // kN*m^2
+    expect(a.reactions[1]?.force).toBeCloseTo((-48 * EI * 0.005) / 6 ** 3, 9);
+  });
+
+  it("a tiny but positive I giving infinite deflections is refused with result-not-finite", () => {
+    const r = tryAnalyzeModel(parseModel({ ...base(), I: 1e-300 }));
+    expect(r.ok).toBe(false);
+    if (!r.ok) expect(r.error.issues.map((i) => `${formatPath(i.path)} [${i.code}]`)).toContain("I [result-not-finite]");
+  });
+
+  it("a tiny but positive allowable stress giving an infinite utilisation is refused with result-not-finite", () => {
+    const r = tryAnalyzeModel(parseModel({ ...base(), I: undefined, section: { shape: "rectangle", width: 100, depth: 200 }, limits: { bendingStress: 1e-320 } }));
+    expect(r.ok).toBe(false);
+    if (!r.ok) expect(r.error.issues.map((i) => `${formatPath(i.path)} [${i.code}]`)).toEqual(["limits.bendingStress [result-not-finite]"]);
+  });
+});
