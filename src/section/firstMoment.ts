@@ -33,6 +33,18 @@ export interface FirstMomentAbove {
   readonly widthBelow: number;
   /** Area above the cut (transformed for multi-material sections; length^2). */
   readonly areaAbove: number;
+  /**
+   * Transformed width b* = sum of n_i b_i on the cut line (length): each part's width times its
+   * modular ratio, holes taken away; the smaller of the two one-sided limits at a step. Equal to
+   * `width` for a section of one material.
+   */
+  readonly transformedWidth: number;
+  /** Transformed width just above the cut. */
+  readonly transformedWidthAbove: number;
+  /** Transformed width just below the cut. */
+  readonly transformedWidthBelow: number;
+  /** Each part's own (actual, unsigned) width on the cut line, the smaller one-sided limit, by part index (length). */
+  readonly partWidths: readonly number[];
 }
 
 const above = new Float64Array(6);
@@ -42,8 +54,9 @@ const whole = new Float64Array(6);
  * First moment Q of the area above the horizontal line y = `yCut` about the centroidal z axis,
  * and the section's width on that line, for the shear stress tau = V Q / (I_z b) (Gere and
  * Goodno, Mechanics of Materials, the shear formula in the chapter on stresses in beams).
- * For a multi-material section Q is transformed (as is I_z from {@link sectionProperties}) and
- * the width is the actual width, so V Q / (I_z b) is the actual shear stress.
+ * For a multi-material section Q is transformed (as is I_z from {@link sectionProperties}); the
+ * width is the actual width and `transformedWidth` b* = sum of n_i b_i: the shear stress in
+ * material i is n_i V Q* / (I* b*) (the transformed-section method), not V Q* / (I* b).
  *
  * @param section - The section.
  * @param yCut - Absolute y of the cut (length); outside the section Q and the width are 0.
@@ -68,6 +81,9 @@ export function firstMomentAbove(section: Section, yCut: number, options?: Secti
   whole.fill(0);
   let widthAbove = 0;
   let widthBelow = 0;
+  let tAbove = 0;
+  let tBelow = 0;
+  const partWidths: number[] = new Array<number>(p.count).fill(0);
   // heights within this of a corner count as the corner (see chordAt): far above rounding, far below any real dimension
   const near = 1e-12 * (p.box[3]! - p.box[2]!);
   for (let i = 0; i < p.count; i++) {
@@ -80,8 +96,13 @@ export function firstMomentAbove(section: Section, yCut: number, options?: Secti
     const yMax = p.partBox[i * 4 + 3]!;
     if (cut >= yMin - near && cut <= yMax + near) {
       const s = p.sign[i]!;
-      widthAbove += s * chordAt(p.edges, from, to, cut, true, near);
-      widthBelow += s * chordAt(p.edges, from, to, cut, false, near);
+      const a = chordAt(p.edges, from, to, cut, true, near);
+      const b = chordAt(p.edges, from, to, cut, false, near);
+      widthAbove += s * a;
+      widthBelow += s * b;
+      tAbove += w * a;
+      tBelow += w * b;
+      partWidths[i] = Math.min(a, b);
     }
     if (cut < yMin) {
       above[M_AREA]! += w * p.partMoments[i * 6 + M_AREA]!;
@@ -97,7 +118,10 @@ export function firstMomentAbove(section: Section, yCut: number, options?: Secti
   const clean = (x: number): number => (Math.abs(x) < 1e-12 * (p.box[1]! - p.box[0]!) ? 0 : x);
   const wa = clean(widthAbove);
   const wb = clean(widthBelow);
-  return { firstMoment, width: Math.min(wa, wb), widthAbove: wa, widthBelow: wb, areaAbove };
+  const ta = clean(tAbove);
+  const tb = clean(tBelow);
+  for (let i = 0; i < p.count; i++) partWidths[i] = clean(partWidths[i]!);
+  return { firstMoment, width: Math.min(wa, wb), widthAbove: wa, widthBelow: wb, areaAbove, transformedWidth: Math.min(ta, tb), transformedWidthAbove: ta, transformedWidthBelow: tb, partWidths };
 }
 
 /**

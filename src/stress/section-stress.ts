@@ -1,12 +1,12 @@
 import { IssueCollector, attempt, requireFinite, type Result } from "../errors/index.js";
-import { firstMomentAbove, sectionProperties, type Section, type SectionProperties, type SectionPropertiesOptions } from "../section/index.js";
+import { sectionProperties, type Section, type SectionPropertiesOptions } from "../section/index.js";
 import { bendingStressPlane, type BiaxialMoments } from "./biaxial.js";
 import { cornerStresses, type CornerStresses } from "./corners.js";
-import { checkPointsPerBand, findPeak, pointAt, profilePoints, type CutSource } from "./shear-peak.js";
+import { checkPointsPerBand, profilePoints } from "./shear-peak.js";
+import { decorate, sectionCut, sectionPeak, sectionPointAt } from "./section-shear.js";
 import type { ShearStressPoint, ShearStressProfile } from "./shear-profile.js";
 import { onBoundary } from "./section-boundary.js";
-import { candidatePoints, sectionLevels } from "./section-points.js";
-import { sectionWidthTerms } from "./section-width-terms.js";
+import { candidatePoints } from "./section-points.js";
 import { checkFibreInside } from "./validate.js";
 
 /** Options of the functions that take a section from the section module. */
@@ -15,25 +15,14 @@ export interface SectionStressOptions extends SectionPropertiesOptions {
   readonly pointsPerBand?: number;
 }
 
-function cutSource(section: Section, props: SectionProperties, options: SectionStressOptions | undefined): CutSource {
-  const cy = props.centroid.y;
-  const opts = options?.referenceModulus === undefined ? undefined : { referenceModulus: options.referenceModulus };
-  return {
-    levels: sectionLevels(section, cy),
-    firstMoment: (y) => firstMomentAbove(section, y + cy, opts).firstMoment,
-    width: (y, side) => {
-      const r = firstMomentAbove(section, y + cy, opts);
-      return side === "above" ? r.widthAbove : r.widthBelow;
-    },
-    terms: () => sectionWidthTerms(section, cy, props.parts.map((p) => p.modularRatio)),
-  };
-}
-
 /**
  * Shear stress tau = V Q / (I_z b) at a horizontal cut of a section from the section module,
- * with Q and b from its `firstMomentAbove` (transformed Q, actual width, the narrower side at a
- * step) and I_z from its `sectionProperties`. Source: Roark's Formulas for Stress and Strain,
- * 8th ed., Sec. 8.1 (from memory).
+ * with Q and b from its `firstMomentAbove` (the narrower side at a step) and I_z from its
+ * `sectionProperties`. Source: Roark's Formulas for Stress and Strain, 8th ed., Sec. 8.1 (from
+ * memory). For several materials, by the transformed section (Gere and Goodno, Mechanics of
+ * Materials, Sec. 6.3, from memory): `stress` is V Q* / (I* b*), b* = sum of n_i b_i the
+ * transformed width of the cut, the stress in the reference material; `materials` gives each
+ * material's own, tau_i = n_i V Q* / (I* b*).
  *
  * @param shear - Shear force V (force).
  * @param section - The section.
@@ -52,8 +41,7 @@ export function sectionShearStressAt(shear: number, section: Section, y: number,
   requireFinite(found, shear, ["shear"], "shear force");
   if (requireFinite(found, y, ["y"], "cut height y")) checkFibreInside(found, y, props.extremes.top, props.extremes.bottom, ["y"]);
   found.throwIfAny();
-  const source = cutSource(section, props, options);
-  return pointAt(shear, source, props.secondMomentZ, y, Math.min(source.width(y, "above"), source.width(y, "below")));
+  return sectionPointAt(shear, sectionCut(section, props, options), y);
 }
 
 /**
@@ -90,9 +78,9 @@ export function sectionShearStressProfile(shear: number, section: Section, optio
   requireFinite(found, shear, ["shear"], "shear force");
   const perBand = checkPointsPerBand(found, options?.pointsPerBand);
   found.throwIfAny();
-  const source = cutSource(section, props, options);
-  const points = profilePoints(shear, source, props.secondMomentZ, perBand);
-  return { kind: "shear-stress-profile", points, peak: findPeak(shear, source, props.secondMomentZ) };
+  const cut = sectionCut(section, props, options);
+  const points = profilePoints(shear, cut.source, props.secondMomentZ, perBand).map((p, i, all) => decorate(cut, p, i > 0 && all[i - 1]!.y === p.y ? "above" : i + 1 < all.length && all[i + 1]!.y === p.y ? "below" : undefined));
+  return { kind: "shear-stress-profile", points, peak: sectionPeak(shear, cut) };
 }
 
 /**
@@ -109,7 +97,9 @@ export function trySectionShearStressProfile(shear: number, section: Section, op
 
 /**
  * The largest shear stress over the depth of a section from the section module; see
- * {@link sectionShearStressProfile}.
+ * {@link sectionShearStressProfile}. For several materials `stress` is the peak on the
+ * transformed section (in the reference material) and `materials` each material's own peak,
+ * tau_i = n_i V Q* / (I* b*), over the heights of its parts: check each against its own allowable.
  *
  * @param shear - Shear force V (force).
  * @param section - The section.
@@ -127,7 +117,7 @@ export function sectionPeakShearStress(shear: number, section: Section, options?
   requireFinite(found, shear, ["shear"], "shear force");
   checkPointsPerBand(found, options?.pointsPerBand);
   found.throwIfAny();
-  return findPeak(shear, cutSource(section, props, options), props.secondMomentZ);
+  return sectionPeak(shear, sectionCut(section, props, options));
 }
 
 /**

@@ -62,11 +62,16 @@ function peakBreaks(source: CutSource, terms: readonly WidthTerm[]): number[] {
  * The point of largest |tau| over the depth. tau = V Q / (I b) is smooth between the heights
  * where the width changes form, so its extremes lie at those heights (on either side of a step
  * in width) or where d(Q/b)/dy = 0 inside a band: the roots found by {@link criticalHeights}.
- * Ties go to the lowest such point.
+ * Ties go to the lowest such point. With `range`, only the heights within it count.
  */
-export function findPeak(shear: number, source: CutSource, inertia: number): ShearStressPoint {
+export function findPeak(shear: number, source: CutSource, inertia: number, range?: readonly [number, number]): ShearStressPoint {
   const terms = source.terms();
-  const breaks = peakBreaks(source, terms);
+  let breaks = peakBreaks(source, terms);
+  if (range !== undefined) {
+    // only the heights from range[0] to range[1] (a part's own heights): its ends become breaks
+    const [lo, hi] = range;
+    breaks = [lo, ...breaks.filter((y) => y > lo && y < hi), hi];
+  }
   let best: ShearStressPoint | undefined;
   const consider = (y: number, width: number): void => {
     const p = pointAt(shear, source, inertia, y + 0, width);

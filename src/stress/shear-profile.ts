@@ -5,6 +5,24 @@ import { checkPointsPerBand, findPeak, pointAt, profilePoints, type CutSource } 
 import { checkFibreInside, checkSecondMoment } from "./validate.js";
 import { depthBandTerms } from "./width-terms.js";
 
+/**
+ * The shear stress in one material at a cut of a multi-material section, by the transformed
+ * section: tau_i = n_i V Q* / (I* b*), with Q* and I* transformed and b* = sum of n_j b_j the
+ * transformed width of the cut.
+ */
+export interface MaterialShearStress {
+  /** The material's modular ratio n = E / E_ref (parts of equal modulus count as one material). */
+  readonly modularRatio: number;
+  /** Indices of the solid parts of this material in `section.parts`. */
+  readonly parts: readonly number[];
+  /** Height of the cut, up from the transformed centroid (length). */
+  readonly y: number;
+  /** The material's own (actual) width on the cut (length). */
+  readonly width: number;
+  /** tau_i = n_i V Q* / (I* b*) (force / length^2), with the sign of V. */
+  readonly stress: number;
+}
+
 /** The shear stress at one height of a section. */
 export interface ShearStressPoint {
   /** Height of the cut, up from the centroid (length). */
@@ -15,6 +33,17 @@ export interface ShearStressPoint {
   readonly firstMoment: number;
   /** Width of material at the cut (length). */
   readonly width: number;
+  /**
+   * Sections from the section module only: the transformed width b* = sum of n_i b_i of the cut
+   * (length), which `stress` uses (equal to `width` for one material).
+   */
+  readonly transformedWidth?: number;
+  /**
+   * Multi-material sections from the section module only: the stress in each material at this
+   * cut (at the peak: each material's own peak over its parts' heights), which `stress`, the
+   * stress on the transformed section (in the reference material), is not.
+   */
+  readonly materials?: readonly MaterialShearStress[];
 }
 
 /** The shear stress over the depth of a section, for plotting. */

@@ -101,7 +101,8 @@ export function sectionOracle(section: Section): OracleSource {
     firstMoment: (y) => sectionFirstMoment(section, y + cy).firstMoment,
     width: (y, side) => {
       const r = sectionFirstMoment(section, y + cy);
-      return side === "above" ? r.widthAbove : r.widthBelow;
+      // the transformed width b* (the actual width for one material): tau = V Q* / (I* b*) on the transformed section
+      return side === "above" ? r.transformedWidthAbove : r.transformedWidthBelow;
     },
   };
 }
