@@ -5,6 +5,8 @@ export default defineConfig({
     include: ["tests/**/*.test.ts"],
     exclude: ["tests/browser/**", "node_modules/**"],
     setupFiles: ["tests/setup.ts"],
+    // Generous: the property suites are sized for a quiet 2-core machine; a busy one must not turn them red.
+    testTimeout: 60000,
     coverage: {
       provider: "v8",
       include: ["src/**/*.ts"],

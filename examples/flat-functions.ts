@@ -2,9 +2,9 @@
 // spreadsheet can call them cell by cell (the spreadsheet wrapper to come will build on this style).
 // A function returns a number, or a string starting with "#" that says what is wrong, as a cell shows.
 // Units are fixed per function and named in its name's documentation: here kN, m, mm, MPa.
-// Run: node node_modules/.bin/unrun examples/flat-functions.ts
-import { attempt, formatPath } from "../src/errors/index.js";
-import { analyzeModel, parseModel, type ModelAnalysis } from "../src/model/index.js";
+// Run (after `npm run build`; the examples import the package by name, as your code will): node node_modules/.bin/unrun examples/flat-functions.ts
+import { attempt, formatPath } from "flexura";
+import { analyzeModel, parseModel, type ModelAnalysis } from "flexura/model";
 
 /** A flat-function answer: a number, or "#" and a message. */
 export type Cell = number | string;

@@ -1,10 +1,8 @@
 // Using flexura's typed API inside an app (Node or browser).
-// In your own code, import from "flexura", "flexura/model" and "flexura/report"; inside this
-// repository the examples import the source.
-// Run: node node_modules/.bin/unrun examples/typed-api.ts
-import { formatPath } from "../src/errors/index.js";
-import { analyzeModel, tryParseModel, type ModelAnalysis } from "../src/model/index.js";
-import { textReport } from "../src/report/index.js";
+// Run (after `npm run build`; the examples import the package by name, as your code will): node node_modules/.bin/unrun examples/typed-api.ts
+import { formatPath } from "flexura";
+import { analyzeModel, tryParseModel, type ModelAnalysis } from "flexura/model";
+import { textReport } from "flexura/report";
 
 /** A member an app might build from its own screens: a timber joist over a 4.2 m span (invented). */
 const joist = {

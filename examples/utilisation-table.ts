@@ -1,12 +1,12 @@
 // A Node script that checks every model file in a folder and prints a table of utilisations,
 // the way an engineer checks a schedule of members. Exits 1 when any member fails, 4 when a file
 // is not a valid model, so it can gate a CI job.
-// Run: node node_modules/.bin/unrun examples/utilisation-table.ts examples/models
+// Run (after `npm run build`; the examples import the package by name, as your code will): node node_modules/.bin/unrun examples/utilisation-table.ts examples/models
 import { readdirSync, readFileSync } from "node:fs";
 import { join } from "node:path";
-import { formatPath } from "../src/errors/index.js";
-import { analyzeModel, tryParseModel } from "../src/model/index.js";
-import { textTable } from "../src/report/index.js";
+import { formatPath } from "flexura";
+import { analyzeModel, tryParseModel } from "flexura/model";
+import { textTable } from "flexura/report";
 
 const folder = process.argv[2] ?? join(import.meta.dirname, "models");
 const files = readdirSync(folder)

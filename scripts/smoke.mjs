@@ -1,7 +1,7 @@
 // Consumer smoke test: install the packed tarball (made by pack-check) into a fresh project
 // and use it from plain ESM, from CommonJS, and from a type-checked TypeScript file.
-import { execFileSync } from "node:child_process";
-import { mkdtempSync, readdirSync, readFileSync, writeFileSync, rmSync } from "node:fs";
+import { execFileSync, spawnSync } from "node:child_process";
+import { copyFileSync, mkdtempSync, readdirSync, readFileSync, writeFileSync, rmSync } from "node:fs";
 import { tmpdir } from "node:os";
 import { join, resolve } from "node:path";
 import { compileConsumers } from "./consumers.mjs";
@@ -11,6 +11,24 @@ const packDir = join(root, ".tmp", "pack");
 const tgz = readdirSync(packDir).find((f) => f.endsWith(".tgz"));
 if (!tgz) throw new Error("smoke: no tarball in .tmp/pack; run scripts/pack-check.mjs first");
 const dir = mkdtempSync(join(tmpdir(), "flexura-smoke-"));
+/** The examples a user copies, run against the installed tarball (they import "flexura" by name). */
+function runExamples(where) {
+  const unrun = join(root, "node_modules", ".bin", "unrun");
+  const example = (name, ...args) => {
+    copyFileSync(join(root, "examples", name), join(where, name));
+    return spawnSync("node", [unrun, join(where, name), ...args], { cwd: where, encoding: "utf8" });
+  };
+  const typed = example("typed-api.ts");
+  if (typed.status !== 0 || !typed.stdout.includes("Caution")) throw new Error(`smoke: typed-api.ts failed:\n${typed.stdout}${typed.stderr}`);
+  // Simple span under a uniform load: M = w L^2 / 8 = 10 * 6^2 / 8 = 45 (common practice).
+  const flat = example("flat-functions.ts");
+  if (flat.status !== 0 || !/= 45\n/.test(flat.stdout)) throw new Error(`smoke: flat-functions.ts failed:\n${flat.stdout}${flat.stderr}`);
+  // The lifting rail fails its deflection check on purpose, so the table's script exits 1.
+  const table = example("utilisation-table.ts", join(root, "examples", "models"));
+  if (table.status !== 1 || !table.stdout.includes("3 pass, 1 fail, 0 invalid")) throw new Error(`smoke: utilisation-table.ts failed:\n${table.stdout}${table.stderr}`);
+  console.log("smoke examples ok: typed-api, flat-functions, utilisation-table against the installed package");
+}
+
 const run = (cmd, args) => execFileSync(cmd, args, { cwd: dir, stdio: "inherit" });
 try {
   writeFileSync(join(dir, "package.json"), JSON.stringify({ name: "smoke", private: true, type: "module" }));
@@ -60,6 +78,7 @@ export { ok, q };
   run("node", [join(root, "node_modules", "typescript", "bin", "tsc"), "-p", "tsconfig.json"]);
   console.log("smoke typescript ok");
   compileConsumers(dir, join(root, "node_modules", "typescript", "bin", "tsc"));
+  runExamples(dir);
 } finally {
   rmSync(dir, { recursive: true, force: true });
 }

@@ -53,7 +53,7 @@ export function modelFailure(error: unknown): CliFailure | undefined {
   if (!isFlexuraError(error)) return undefined;
   return {
     exitCode: EXIT.invalidModel,
-    problems: error.issues.map((i) => ({ code: i.code, path: formatPath(i.path), message: i.message })),
+    problems: error.issues.map((i) => ({ code: i.code, path: i.path.length === 0 ? "" : formatPath(i.path), message: i.message })),
   };
 }
 

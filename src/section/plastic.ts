@@ -137,7 +137,8 @@ function quarterTurn(edges: Float64Array, out: Float64Array): Float64Array {
  *
  * @param section - A section whose solid parts all have the same material (or none).
  * @throws FlexuraError any code of `section()`, and `plastic-needs-one-material` when the
- *   solid parts have different elastic moduli or yield strengths.
+ *   solid parts have different elastic moduli or yield strengths; `result-out-of-range` when the
+ *   plastic moment would overflow.
  * @example
  * ```ts
  * plasticProperties(rectangle({ width: 100, depth: 200 })).plasticModulusZ; // b d^2 / 4 = 1e6
@@ -183,6 +184,10 @@ export function plasticProperties(section: Section): PlasticProperties {
   const zy = aboutY.modulus;
   const s = elastic.sectionModulus;
   const yieldStrength = Number.isNaN(fy) ? null : fy;
+  if (yieldStrength !== null && !Number.isFinite(yieldStrength * Math.max(zz, zy))) {
+    found.add("result-out-of-range", ["parts", 0, "material", "yieldStrength"], `The plastic moment f_y Z (${yieldStrength} times ${Math.max(zz, zy)}) is beyond what a number holds; check the units of the yield strength.`, { yieldStrength });
+    found.throwIfAny();
+  }
   return {
     neutralAxisY: aboutZ.axis + p.refY,
     plasticModulusZ: zz,

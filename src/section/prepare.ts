@@ -5,6 +5,7 @@ import { boundarySamples, containsPoint } from "./contain.js";
 import { ARC, STRIDE, pushPartBoundary } from "./edges.js";
 import { sinExact, cosExact } from "./angles.js";
 import { addMoments } from "./integrals.js";
+import { RATIO_LIMIT, SIZE_FLOOR } from "./limits.js";
 import { checkOverlaps } from "./overlap.js";
 import { validatePart } from "./validatePart.js";
 import { fillWeights, type Weights } from "./weights.js";
@@ -102,6 +103,25 @@ function carve(doubles: number): ArrayBuffer {
   return block;
 }
 
+/** Records `modular-ratio-out-of-range` when the solid parts' moduli differ by more than RATIO_LIMIT. */
+function checkModuli(found: IssueCollector, modulus: Float64Array, sign: Float64Array, count: number): void {
+  let lo = -1;
+  let hi = -1;
+  for (let i = 0; i < count; i++) {
+    if (sign[i] !== 1 || Number.isNaN(modulus[i]!)) continue;
+    if (lo < 0 || modulus[i]! < modulus[lo]!) lo = i;
+    if (hi < 0 || modulus[i]! > modulus[hi]!) hi = i;
+  }
+  if (lo >= 0 && modulus[hi]! / modulus[lo]! > RATIO_LIMIT) {
+    found.add(
+      "modular-ratio-out-of-range",
+      ["parts", hi, "material", "elasticModulus"],
+      `Parts ${lo} and ${hi} have moduli ${modulus[lo]} and ${modulus[hi]}, a ratio beyond ${RATIO_LIMIT}; no transformed section carries that (check the units of the moduli).`,
+      { parts: [lo, hi], limit: RATIO_LIMIT },
+    );
+  }
+}
+
 function compile(section: Section, found: IssueCollector): PreparedSection | undefined {
   const parts = section.parts;
   const count = parts.length;
@@ -146,6 +166,11 @@ function compile(section: Section, found: IssueCollector): PreparedSection | und
     found.add("section-no-solid", ["parts"], "Every part is a hole; add the solid parts.");
     return undefined;
   }
+  if (!(Math.max(box[1]! - box[0]!, box[3]! - box[2]!) >= SIZE_FLOOR)) {
+    const size = Math.max(box[1]! - box[0]!, box[3]! - box[2]!);
+    found.add("section-too-small", ["parts"], `The section is ${size} across; it must be at least ${SIZE_FLOOR} (its second moments would underflow to zero): use a smaller unit of length.`, { size, floor: SIZE_FLOOR });
+    return undefined;
+  }
   const refZ = (box[0]! + box[1]!) / 2;
   const refY = (box[2]! + box[3]!) / 2;
   edges.set(list);
@@ -186,6 +211,7 @@ function compile(section: Section, found: IssueCollector): PreparedSection | und
     }
   }
   const hasMaterial = withMaterial > 0;
+  if (hasMaterial) checkModuli(found, modulus, sign, count);
   if (hasMaterial && withMaterial < solids) {
     for (let i = 0; i < count; i++) {
       if (sign[i] === 1 && !parts[i]?.material) {

@@ -1,10 +1,23 @@
 // Checks one part's data: types, finite numbers, positive sizes, simple polygons.
 import { describeValue, requireFinite, unknownKeyHint, type IssueCollector, type IssuePath } from "../errors/index.js";
 import { normalisedPolygon, polygonArea } from "./edges.js";
+import { LENGTH_LIMIT, isLength } from "./limits.js";
 import { findSelfIntersection } from "./polygonCheck.js";
 
 function isObject(value: unknown): value is Record<string, unknown> {
   return typeof value === "object" && value !== null && !Array.isArray(value);
+}
+
+/** Records `dimension-out-of-range` for a finite length beyond what the arithmetic carries; true when it is within. */
+function checkLength(found: IssueCollector, value: number, path: IssuePath, what: string): boolean {
+  if (Math.abs(value) <= LENGTH_LIMIT) return true;
+  found.add(
+    "dimension-out-of-range",
+    path,
+    `The ${what} is ${value}; section lengths must lie within ${LENGTH_LIMIT} in magnitude (second moments grow as a length to the fourth power): use a larger unit of length.`,
+    { value, limit: LENGTH_LIMIT },
+  );
+  return false;
 }
 
 function isFiniteNumber(value: unknown): value is number {
@@ -14,21 +27,22 @@ function isFiniteNumber(value: unknown): value is number {
 // The checks take the parent path and the key, and build the field's path only for a report.
 /** Records a problem with a point `{ y, z }` of finite numbers at `parent[key]`; true when it is fine. */
 export function checkPoint(found: IssueCollector, value: unknown, parent: IssuePath, key: string | number, what: string): boolean {
-  if (isObject(value) && isFiniteNumber(value["y"]) && isFiniteNumber(value["z"])) return true;
+  if (isObject(value) && isLength(value["y"]) && isLength(value["z"])) return true;
   const path = [...parent, key];
   if (!isObject(value)) {
     found.add("point-invalid", path, `The ${what} must be an object { y, z }; got ${describeValue(value)}.`);
     return false;
   }
-  const okY = requireFinite(found, value["y"], [...path, "y"], `${what} y coordinate`);
-  const okZ = requireFinite(found, value["z"], [...path, "z"], `${what} z coordinate`);
+  const okY = requireFinite(found, value["y"], [...path, "y"], `${what} y coordinate`) && checkLength(found, value["y"], [...path, "y"], `${what} y coordinate`);
+  const okZ = requireFinite(found, value["z"], [...path, "z"], `${what} z coordinate`) && checkLength(found, value["z"], [...path, "z"], `${what} z coordinate`);
   return okY && okZ;
 }
 
-function checkPositive(found: IssueCollector, value: unknown, parent: IssuePath, key: string, what: string, code = "dimension-not-positive"): boolean {
-  if (isFiniteNumber(value) && value > 0) return true;
+function checkPositive(found: IssueCollector, value: unknown, parent: IssuePath, key: string, what: string, code = "dimension-not-positive", length = true): boolean {
+  if (isFiniteNumber(value) && value > 0 && (!length || value <= LENGTH_LIMIT)) return true;
   const path = [...parent, key];
   if (!requireFinite(found, value, path, what)) return false;
+  if (value > 0) return checkLength(found, value, path, what);
   found.add(code, path, `The ${what} must be greater than zero; got ${value}.`, { value });
   return false;
 }
@@ -41,9 +55,9 @@ function checkMaterial(found: IssueCollector, value: unknown, parent: IssuePath)
     return;
   }
   checkFields(found, value, MATERIAL_FIELDS, path, "material");
-  checkPositive(found, value["elasticModulus"], path, "elasticModulus", "elastic modulus", "elastic-modulus-not-positive");
+  checkPositive(found, value["elasticModulus"], path, "elasticModulus", "elastic modulus", "elastic-modulus-not-positive", false);
   if (value["yieldStrength"] !== undefined) {
-    checkPositive(found, value["yieldStrength"], path, "yieldStrength", "yield strength", "yield-strength-not-positive");
+    checkPositive(found, value["yieldStrength"], path, "yieldStrength", "yield strength", "yield-strength-not-positive", false);
   }
   if (value["name"] !== undefined && typeof value["name"] !== "string") {
     found.add("material-invalid", [...path, "name"], `The material name must be a string; got ${describeValue(value["name"])}.`);
@@ -81,7 +95,7 @@ function checkPolygon(found: IssueCollector, part: Record<string, unknown>, path
   for (let i = 0; i < points.length; i++) {
     const p: unknown = points[i];
     // fast path for a well-formed point; the full check (with its path) only when one is not
-    if (isObject(p) && isFiniteNumber(p["y"]) && isFiniteNumber(p["z"])) continue;
+    if (isObject(p) && isLength(p["y"]) && isLength(p["z"])) continue;
     if (!checkPoint(found, p, [...path, "points"], i, `point ${i}`)) ok = false;
   }
   if (!ok) return;

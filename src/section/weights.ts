@@ -1,5 +1,6 @@
 // Modular ratios and signed weights of the parts of a prepared section.
 import { IssueCollector } from "../errors/index.js";
+import { RATIO_LIMIT } from "./limits.js";
 import type { PreparedSection } from "./prepare.js";
 
 /** The transformed-section weights for one reference modulus. */
@@ -41,7 +42,7 @@ export function fillWeights(p: WeightInput, referenceModulus: number | undefined
  * Weights for a reference modulus (default: that of the first solid part with a material; the
  * default weights are part of the prepared section).
  *
- * @throws FlexuraError `reference-modulus-not-positive` (or `not-a-number` / `not-finite`).
+ * @throws FlexuraError `reference-modulus-not-positive` (or `not-a-number` / `not-finite`), `modular-ratio-out-of-range`.
  */
 export function partWeights(p: PreparedSection, referenceModulus: number | undefined): Weights {
   if (referenceModulus === undefined) return p.defaultWeights;
@@ -49,6 +50,19 @@ export function partWeights(p: PreparedSection, referenceModulus: number | undef
     const found = new IssueCollector();
     found.add("reference-modulus-not-positive", ["referenceModulus"], `The reference modulus must be a finite number greater than zero; got ${String(referenceModulus)}.`, { value: String(referenceModulus) });
     found.throwIfAny();
+  }
+  for (let i = 0; i < p.count; i++) {
+    const n = p.modulus[i]! / referenceModulus;
+    if (p.hasMaterial && (n > RATIO_LIMIT || n < 1 / RATIO_LIMIT)) {
+      const found = new IssueCollector();
+      found.add(
+        "modular-ratio-out-of-range",
+        ["referenceModulus"],
+        `Against the reference modulus ${referenceModulus}, part ${i} has a modular ratio of ${n}, beyond ${RATIO_LIMIT} either way; use a reference modulus near the parts' moduli.`,
+        { part: i, ratio: n, limit: RATIO_LIMIT },
+      );
+      found.throwIfAny();
+    }
   }
   const both = new Float64Array(2 * p.count);
   return fillWeights(p, referenceModulus, both.subarray(0, p.count), both.subarray(p.count));

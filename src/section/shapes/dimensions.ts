@@ -1,5 +1,6 @@
 // Shared checks and builders for the parametric shapes.
 import { IssueCollector, describeValue, requireFinite, unknownKeyHint } from "../../errors/index.js";
+import { LENGTH_LIMIT } from "../limits.js";
 import type { Material, PolygonPart, SectionPart, SectionPoint } from "../types.js";
 
 /** Options common to every shape function. */
@@ -33,6 +34,12 @@ export function checkShapeOptions(found: IssueCollector, options: unknown): void
   checkKnownKeys(found, options as Record<string, unknown>, ["material"], ["options"], "option");
 }
 
+function checkBound(found: IssueCollector, name: string, v: number): boolean {
+  if (v <= LENGTH_LIMIT) return true;
+  found.add("dimension-out-of-range", [name], `${name} is ${v}; section lengths must lie within ${LENGTH_LIMIT} (second moments grow as a length to the fourth power): use a larger unit of length.`, { value: v, limit: LENGTH_LIMIT });
+  return false;
+}
+
 /**
  * Checks that each named field of `dims` is a finite number > 0 (required), absent or >= 0
  * (`optional`), or absent or > 0 (`positiveIfGiven`), and that no other key is given (`unknown-field`, with the closest name
@@ -58,7 +65,7 @@ export function checkDimensions(
     else if (!(v > 0)) {
       found.add("dimension-not-positive", [name], `${name} must be greater than zero; got ${v}.`, { value: v });
       ok = false;
-    }
+    } else if (!checkBound(found, name, v)) ok = false;
   }
   for (const name of optional) {
     const v = d[name];
@@ -67,7 +74,7 @@ export function checkDimensions(
     else if (v < 0) {
       found.add("dimension-negative", [name], `${name} must not be negative; got ${v}.`, { value: v });
       ok = false;
-    }
+    } else if (!checkBound(found, name, v)) ok = false;
   }
   return { found, ok };
 }
