@@ -1,4 +1,4 @@
-import { IssueCollector, attempt, requireFinite, type Result } from "../errors/index.js";
+import { IssueCollector, attempt, fail, requireFinite, type Result } from "../errors/index.js";
 import type { BendingProperties } from "./types.js";
 import { checkExtremes, checkFibreInside, checkSecondMoment } from "./validate.js";
 
@@ -49,9 +49,17 @@ export function tryBendingStress(moment: number, y: number, section: BendingProp
   return attempt(() => bendingStress(moment, y, section));
 }
 
-/** sigma = -M y / I, written so that a zero stress is +0 (never -0). */
+/**
+ * sigma = -M y / I, written so that a zero stress is +0 (never -0). When the product M y overflows but the
+ * stress itself is representable, it is computed as -(M / I) y instead; a stress beyond double precision is
+ * refused with `stress-overflow` (path `moment`), never returned as an infinity.
+ */
 export function stressAt(moment: number, y: number, secondMoment: number): number {
-  const s = (-moment * y) / secondMoment;
+  let s = (-moment * y) / secondMoment;
+  if (!Number.isFinite(s)) s = -(moment / secondMoment) * y;
+  if (!Number.isFinite(s)) {
+    fail("stress-overflow", ["moment"], `The bending stress -M y / I is beyond what double precision can hold (M = ${moment}, y = ${y}, I = ${secondMoment}); check the units of the moment and the section.`, { moment, y, secondMoment });
+  }
   return s === 0 ? 0 : s;
 }
 
