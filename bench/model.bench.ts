@@ -43,10 +43,16 @@ const flitch = parseModel({
 });
 const analysis = analyzeModel(model);
 
+// The same span under 5,000 equal point loads (invented): parse and analyse stay linear in the loads.
+const crowdedFile = { ...file, loads: Array.from({ length: 5000 }, (_, i) => ({ type: "point", at: (9 * (i + 0.5)) / 5000, value: 0.01 })) };
+const crowded = parseModel(crowdedFile);
+
 suite("model", () => {
   bench("model: parseModel of a typical model file", () => parseModel(file));
   bench("model: analyzeModel (solve, section, stresses, checks)", () => analyzeModel(model));
   bench("model: parse + analyze + analysisToJson", () => analysisToJson(analyzeModel(parseModel(file))));
   bench("model: analysisToJson alone", () => analysisToJson(analysis));
   bench("model: analyzeModel (built-up section of two materials, checks part by part)", () => analyzeModel(flitch));
+  bench("model: parseModel of 5,000 point loads", () => parseModel(crowdedFile));
+  bench("model: analyzeModel of 5,000 point loads", () => analyzeModel(crowded));
 });

@@ -3,6 +3,6 @@ export { piecewisePolynomial, pieceCount, findPiece, evaluatePiecewise, evaluate
 export { scalePiecewise, addPiecewise, derivativeOf, integralOf } from "./piecewise-ops.js";
 export type { LocatedValue, Extremes } from "./piecewise-extremes.js";
 export { extremesOf, rootsOf } from "./piecewise-extremes.js";
-export { evaluatePolynomial, polynomialRootsIn } from "./polynomial.js";
+export { evaluatePolynomial, polynomialRootsIn } from "./polynomial-api.js";
 export type { BandedFactorReport } from "./banded.js";
 export { factorBandedSymmetric, solveBandedSymmetric } from "./banded.js";

@@ -1,6 +1,7 @@
 import { fail } from "../errors/index.js";
+import { checkNumber, checkPiecewise, overflow } from "./checks.js";
 import type { PiecewisePolynomial } from "./piecewise.js";
-import { clearOfZero, evaluatePolynomial, rootsToScratch, scratchRoots } from "./polynomial.js";
+import { clearOfZero, evaluatePolynomial, rootsToScratch, scratchRoots, takeRootOverflow } from "./polynomial.js";
 
 /** A value and where it occurs. */
 export interface LocatedValue {
@@ -18,10 +19,22 @@ export interface Extremes {
   readonly min: LocatedValue;
 }
 
+/** The interval `[lo, hi]` (each defaulting to the end of the domain), checked. */
+function interval(pp: PiecewisePolynomial, lo: unknown, hi: unknown): readonly [number, number] {
+  const b = pp.breaks;
+  const x0 = b[0] as number;
+  const x1 = b[b.length - 1] as number;
+  const from = lo === undefined ? x0 : checkNumber(lo, "lo");
+  const to = hi === undefined ? x1 : checkNumber(hi, "hi");
+  checkInterval(pp, from, to);
+  return [from, to];
+}
+
 function checkInterval(pp: PiecewisePolynomial, lo: number, hi: number): void {
   const b = pp.breaks;
   const x0 = b[0] as number;
   const x1 = b[b.length - 1] as number;
+  if (hi < lo) fail("interval-reversed", ["hi"], `The interval [${lo}, ${hi}] ends before it starts.`, { lo, hi });
   if (!(lo >= x0 && hi <= x1 && lo <= hi)) fail("outside-domain", ["lo"], `The interval [${lo}, ${hi}] is not within [${x0}, ${x1}].`, { lo, hi });
 }
 
@@ -32,7 +45,9 @@ const derivative = new Float64Array(16);
  * candidates are each piece's ends (so both one-sided limits at a jump count) and the real roots
  * of each piece's derivative. Ties keep the leftmost location.
  *
- * @throws FlexuraError `outside-domain` when the interval is not within the domain.
+ * @throws FlexuraError `outside-domain` when the interval is not within the domain (or an end is NaN);
+ *   `interval-reversed` when `hi < lo`; `not-a-number` (lo, hi); `piecewise-invalid` (pp);
+ *   `piecewise-overflow` when the polynomial's values exceed what a double can hold.
  * @example
  * ```ts
  * const pp = piecewisePolynomial([0, 2], [0, 2, -1], 2); // 2x - x^2
@@ -40,10 +55,10 @@ const derivative = new Float64Array(16);
  * ```
  */
 export function extremesOf(pp: PiecewisePolynomial, lo?: number, hi?: number): Extremes {
+  pp = checkPiecewise(pp, "pp");
   const b = pp.breaks;
-  const from: number = lo ?? (b[0] as number);
-  const to: number = hi ?? (b[b.length - 1] as number);
-  checkInterval(pp, from, to);
+  const [from, to] = interval(pp, lo, hi);
+  takeRootOverflow();
   const d = pp.degree;
   const stride = d + 1;
   const c = pp.coefficients;
@@ -99,6 +114,7 @@ export function extremesOf(pp: PiecewisePolynomial, lo?: number, hi?: number): E
       minX = xe;
     }
   }
+  if (takeRootOverflow() || maxV - maxV !== 0 || minV - minV !== 0) overflow(["pp"], "A value of the polynomial");
   return { max: { value: maxV, at: maxX }, min: { value: minV, at: minX } };
 }
 
@@ -108,17 +124,19 @@ export function extremesOf(pp: PiecewisePolynomial, lo?: number, hi?: number): E
  * is identically zero contributes no roots; a jump across zero at a breakpoint is not a root.
  * A root shared by two pieces at their common breakpoint is reported once.
  *
- * @throws FlexuraError `outside-domain` when the interval is not within the domain.
+ * @throws FlexuraError `outside-domain` when the interval is not within the domain (or an end is NaN);
+ *   `interval-reversed` when `hi < lo`; `not-a-number` (lo, hi); `piecewise-invalid` (pp);
+ *   `piecewise-overflow` when the polynomial's values exceed what a double can hold.
  * @example
  * ```ts
  * rootsOf(piecewisePolynomial([0, 4], [-2, 0, 1], 2)); // [1.4142135623730951]
  * ```
  */
 export function rootsOf(pp: PiecewisePolynomial, lo?: number, hi?: number): readonly number[] {
+  pp = checkPiecewise(pp, "pp");
   const b = pp.breaks;
-  const from: number = lo ?? (b[0] as number);
-  const to: number = hi ?? (b[b.length - 1] as number);
-  checkInterval(pp, from, to);
+  const [from, to] = interval(pp, lo, hi);
+  takeRootOverflow();
   const d = pp.degree;
   const stride = d + 1;
   const out: number[] = [];
@@ -138,5 +156,6 @@ export function rootsOf(pp: PiecewisePolynomial, lo?: number, hi?: number): read
       if (!(Math.abs(x - prev) <= 1e-12 * (Math.abs(x) + (x1 - x0)))) out.push(x);
     }
   }
+  if (takeRootOverflow()) overflow(["pp"], "A value of the polynomial");
   return out;
 }

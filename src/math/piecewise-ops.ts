@@ -1,19 +1,23 @@
 import { fail } from "../errors/index.js";
+import { checkFinite, checkNoOverflow, checkPiecewise, overflow } from "./checks.js";
 import { makePiecewise, type PiecewisePolynomial } from "./piecewise.js";
 
 /**
  * Multiplies every value by `factor`.
  *
- * @throws FlexuraError `not-finite` when `factor` is not a finite number.
+ * @throws FlexuraError `not-a-number` / `not-finite` when `factor` is not a finite number; `piecewise-invalid` (pp);
+ *   `piecewise-overflow` when a product exceeds what a double can hold.
  * @example
  * ```ts
  * scalePiecewise(piecewisePolynomial([0, 1], [1, 1], 1), 2); // 2 + 2x on [0, 1]
  * ```
  */
 export function scalePiecewise(pp: PiecewisePolynomial, factor: number): PiecewisePolynomial {
-  if (!Number.isFinite(factor)) fail("not-finite", ["factor"], `The factor must be a finite number; got ${factor}.`);
+  pp = checkPiecewise(pp, "pp");
+  checkFinite(factor, "factor", "factor");
   const c = new Float64Array(pp.coefficients.length);
   for (let i = 0; i < c.length; i++) c[i] = (pp.coefficients[i] as number) * factor;
+  checkNoOverflow(c, [], "The scaled polynomial");
   return makePiecewise(pp.breaks.slice(), c, pp.degree);
 }
 
@@ -31,7 +35,8 @@ function shiftInto(c: Float64Array, co: number, d: number, s: number, out: Float
  * The sum of two piecewise polynomials on the same domain. The result breaks wherever either
  * operand does, and its degree is the larger of the two.
  *
- * @throws FlexuraError `domain-mismatch` when the two do not share the same first and last breakpoint.
+ * @throws FlexuraError `domain-mismatch` when the two do not share the same first and last breakpoint;
+ *   `piecewise-invalid` (a or b); `piecewise-overflow` when a sum exceeds what a double can hold.
  * @example
  * ```ts
  * const a = piecewisePolynomial([0, 2], [1, 1], 1); // 1 + x
@@ -40,6 +45,8 @@ function shiftInto(c: Float64Array, co: number, d: number, s: number, out: Float
  * ```
  */
 export function addPiecewise(a: PiecewisePolynomial, b: PiecewisePolynomial): PiecewisePolynomial {
+  a = checkPiecewise(a, "a");
+  b = checkPiecewise(b, "b");
   const ab = a.breaks;
   const bb = b.breaks;
   if (ab[0] !== bb[0] || ab[ab.length - 1] !== bb[bb.length - 1])
@@ -52,8 +59,11 @@ export function addPiecewise(a: PiecewisePolynomial, b: PiecewisePolynomial): Pi
     const y = j < bb.length ? (bb[j] as number) : Infinity;
     const v = Math.min(x, y);
     merged.push(v);
+    const advanced = i + j;
     if (x === v) i++;
     if (y === v) j++;
+    // breakpoints written to after the check (NaN) must not stall the merge
+    if (i + j === advanced) fail("piecewise-invalid", [], "The breakpoints were changed after the piecewise polynomials were built.");
   }
   const d = Math.max(a.degree, b.degree);
   const stride = d + 1;
@@ -70,18 +80,21 @@ export function addPiecewise(a: PiecewisePolynomial, b: PiecewisePolynomial): Pi
     shiftInto(b.coefficients, ib * (b.degree + 1), b.degree, x - (bb[ib] as number), tmp, 0, d);
     for (let k = 0; k < stride; k++) out[p * stride + k] = (out[p * stride + k] as number) + (tmp[k] as number);
   }
+  checkNoOverflow(out, [], "The sum");
   return makePiecewise(Float64Array.from(merged), out, d);
 }
 
 /**
  * The derivative, piece by piece (degree one lower; a constant's derivative is zero).
  *
+ * @throws FlexuraError `piecewise-invalid` (pp); `piecewise-overflow` when a coefficient exceeds what a double can hold.
  * @example
  * ```ts
  * derivativeOf(piecewisePolynomial([0, 2], [0, 0, 1], 2)); // 2x on [0, 2]
  * ```
  */
 export function derivativeOf(pp: PiecewisePolynomial): PiecewisePolynomial {
+  pp = checkPiecewise(pp, "pp");
   const d = pp.degree;
   const nd = Math.max(d - 1, 0);
   const pieces = pp.breaks.length - 1;
@@ -89,6 +102,7 @@ export function derivativeOf(pp: PiecewisePolynomial): PiecewisePolynomial {
   for (let p = 0; p < pieces; p++) {
     for (let k = 1; k <= d; k++) out[p * (nd + 1) + k - 1] = k * (pp.coefficients[p * (d + 1) + k] as number);
   }
+  checkNoOverflow(out, [], "The derivative");
   return makePiecewise(pp.breaks.slice(), out, nd);
 }
 
@@ -96,14 +110,16 @@ export function derivativeOf(pp: PiecewisePolynomial): PiecewisePolynomial {
  * The integral from the first breakpoint: continuous across breakpoints and equal to
  * `constant` at the start (degree one higher).
  *
- * @throws FlexuraError `not-finite` when `constant` is not a finite number.
+ * @throws FlexuraError `not-a-number` / `not-finite` when `constant` is not a finite number; `piecewise-invalid` (pp);
+ *   `piecewise-overflow` when the integral exceeds what a double can hold.
  * @example
  * ```ts
  * integralOf(piecewisePolynomial([0, 1, 2], [1, 2], 0)); // x on [0, 1], then 1 + 2(x - 1)
  * ```
  */
 export function integralOf(pp: PiecewisePolynomial, constant = 0): PiecewisePolynomial {
-  if (!Number.isFinite(constant)) fail("not-finite", ["constant"], `The constant must be a finite number; got ${constant}.`);
+  pp = checkPiecewise(pp, "pp");
+  checkFinite(constant, "constant", "constant");
   const d = pp.degree;
   const nd = d + 1;
   const pieces = pp.breaks.length - 1;
@@ -118,5 +134,8 @@ export function integralOf(pp: PiecewisePolynomial, constant = 0): PiecewisePoly
     for (let k = nd - 1; k >= 0; k--) v = v * h + (out[o + k] as number);
     value = v;
   }
+  // the value at the end is the next piece's constant; the last one is checked here
+  if (value - value !== 0) overflow([], "The integral");
+  checkNoOverflow(out, [], "The integral");
   return makePiecewise(pp.breaks.slice(), out, nd);
 }

@@ -1,4 +1,5 @@
-import { fail } from "../errors/index.js";
+import { describeValue, fail, IssueCollector } from "../errors/index.js";
+import { checkBreaks, checkCoefficients, checkNumber, checkPiecewise, checkPoints, checkSide, isNumberList, MAX_DEGREE, overflow, trusted } from "./checks.js";
 import { evaluatePolynomial } from "./polynomial.js";
 
 /**
@@ -38,7 +39,8 @@ export type PiecewiseSide = "left" | "right";
  * @param breaks - strictly increasing breakpoints (at least two).
  * @param coefficients - `degree + 1` coefficients per piece, lowest power first, in powers of `x - breaks[i]`.
  * @param degree - highest power, 0 to 8.
- * @throws FlexuraError `piecewise-invalid` when the breakpoints are not strictly increasing and finite,
+ * @throws FlexuraError `piecewise-invalid` when the breakpoints or coefficients are not arrays of numbers,
+ *   the breakpoints are not strictly increasing and finite, the coefficients are not finite,
  *   the degree is not an integer from 0 to 8, or the number of coefficients does not match.
  * @example
  * ```ts
@@ -46,24 +48,24 @@ export type PiecewiseSide = "left" | "right";
  * ```
  */
 export function piecewisePolynomial(breaks: ArrayLike<number>, coefficients: ArrayLike<number>, degree: number): PiecewisePolynomial {
-  if (!Number.isInteger(degree) || degree < 0 || degree > 8) fail("piecewise-invalid", ["degree"], `The degree must be an integer from 0 to 8; got ${degree}.`);
+  const found = new IssueCollector();
+  if (!isNumberList(breaks)) found.add("piecewise-invalid", ["breaks"], `The breakpoints must be an array of numbers; got ${describeValue(breaks)}.`);
+  if (!isNumberList(coefficients)) found.add("piecewise-invalid", ["coefficients"], `The coefficients must be an array of numbers; got ${describeValue(coefficients)}.`);
+  found.throwIfAny();
+  if (typeof degree !== "number" || !Number.isInteger(degree) || degree < 0 || degree > MAX_DEGREE)
+    fail("piecewise-invalid", ["degree"], `The degree must be an integer from 0 to ${MAX_DEGREE}; got ${describeValue(degree)}.`);
   if (breaks.length < 2) fail("piecewise-invalid", ["breaks"], "A piecewise polynomial needs at least two breakpoints.");
-  for (let i = 0; i < breaks.length; i++) {
-    const b = breaks[i] as number;
-    if (!Number.isFinite(b) || (i > 0 && !(b > (breaks[i - 1] as number))))
-      fail("piecewise-invalid", ["breaks", i], "Breakpoints must be finite and strictly increasing.");
-  }
+  checkBreaks(breaks, ["breaks"]);
   const pieces = breaks.length - 1;
   if (coefficients.length !== pieces * (degree + 1))
     fail("piecewise-invalid", ["coefficients"], `Expected ${pieces * (degree + 1)} coefficients (${degree + 1} per piece); got ${coefficients.length}.`);
-  for (let i = 0; i < coefficients.length; i++)
-    if (!Number.isFinite(coefficients[i])) fail("piecewise-invalid", ["coefficients", i], "Coefficients must be finite.");
-  return Object.freeze({ kind: "piecewise-polynomial", degree, breaks: Float64Array.from(breaks), coefficients: Float64Array.from(coefficients) });
+  checkCoefficients(coefficients, ["coefficients"]);
+  return makePiecewise(Float64Array.from(breaks), Float64Array.from(coefficients), degree);
 }
 
 /** Builds without checks or copies; for flexura's own kernels, which guarantee the invariants. */
 export function makePiecewise(breaks: Float64Array, coefficients: Float64Array, degree: number): PiecewisePolynomial {
-  return Object.freeze({ kind: "piecewise-polynomial", degree, breaks, coefficients });
+  return trusted({ kind: "piecewise-polynomial", degree, breaks, coefficients });
 }
 
 /**
@@ -75,20 +77,25 @@ export function makePiecewise(breaks: Float64Array, coefficients: Float64Array, 
  * ```
  */
 export function pieceCount(pp: PiecewisePolynomial): number {
-  return pp.breaks.length - 1;
+  return checkPiecewise(pp, "pp").breaks.length - 1;
 }
 
 /**
  * Index of the piece that holds `x`; at a breakpoint, `side` picks the piece to its left or right.
  * Assumes `x` lies in the domain (clamps otherwise).
  *
+ * @throws FlexuraError `piecewise-invalid` (pp), `not-a-number` (x), `unknown-side` (side).
  * @example
  * ```ts
  * findPiece(piecewisePolynomial([0, 1, 3], [0, 2, 2, -1], 1), 1, "left"); // 0
  * ```
  */
 export function findPiece(pp: PiecewisePolynomial, x: number, side: PiecewiseSide = "right"): number {
-  const b = pp.breaks;
+  return locate(checkPiecewise(pp, "pp").breaks, checkNumber(x, "x"), checkSide(side));
+}
+
+/** {@link findPiece} without checks, on the breakpoints. */
+function locate(b: Float64Array, x: number, side: PiecewiseSide): number {
   let lo = 0;
   let hi = b.length - 2;
   if (side === "right") {
@@ -114,7 +121,9 @@ export function findPiece(pp: PiecewisePolynomial, x: number, side: PiecewiseSid
  * left or from the right (default `"right"`; at the last breakpoint the right limit does not
  * exist and the left one is returned).
  *
- * @throws FlexuraError `outside-domain` when `x` is not a number within `[breaks[0], breaks[last]]`.
+ * @throws FlexuraError `outside-domain` when `x` is NaN or outside `[breaks[0], breaks[last]]`;
+ *   `not-a-number` (x), `unknown-side` (side), `piecewise-invalid` (pp);
+ *   `piecewise-overflow` when the value exceeds what a double can hold.
  * @example
  * ```ts
  * const step = piecewisePolynomial([0, 1, 2], [1, 3], 0);
@@ -123,12 +132,17 @@ export function findPiece(pp: PiecewisePolynomial, x: number, side: PiecewiseSid
  * ```
  */
 export function evaluatePiecewise(pp: PiecewisePolynomial, x: number, side: PiecewiseSide = "right"): number {
-  const b = pp.breaks;
+  const q = checkPiecewise(pp, "pp");
+  if (side !== "right" && side !== "left") checkSide(side);
+  if (typeof x !== "number") checkNumber(x, "x");
+  const b = q.breaks;
   if (!(x >= (b[0] as number) && x <= (b[b.length - 1] as number)))
     fail("outside-domain", ["x"], `x = ${x} lies outside [${b[0]}, ${b[b.length - 1]}].`, { x });
-  const i = findPiece(pp, x, side);
-  const stride = pp.degree + 1;
-  return evaluatePolynomial(pp.coefficients, i * stride, pp.degree, x - (b[i] as number));
+  const i = locate(b, x, side);
+  const d = q.degree;
+  const v = evaluatePolynomial(q.coefficients, i * (d + 1), d, x - (b[i] as number));
+  if (v - v !== 0) overflow(["x"], `The value at x = ${x}`);
+  return v;
 }
 
 /**
@@ -136,7 +150,9 @@ export function evaluatePiecewise(pp: PiecewisePolynomial, x: number, side: Piec
  * but sorted points are fastest: the piece search then walks forward. At a breakpoint the
  * right-hand limit is taken (the left-hand one at the last breakpoint).
  *
- * @throws FlexuraError `outside-domain` when a point lies outside the domain or is NaN.
+ * @throws FlexuraError `outside-domain` when a point lies outside the domain or is NaN;
+ *   `not-an-array` / `not-a-number` (xs), `output-invalid` (out not a Float64Array as long as xs),
+ *   `piecewise-invalid` (pp), `piecewise-overflow` when a value exceeds what a double can hold.
  * @example
  * ```ts
  * const pp = piecewisePolynomial([0, 2], [0, 0, 1], 2); // x^2
@@ -144,11 +160,15 @@ export function evaluatePiecewise(pp: PiecewisePolynomial, x: number, side: Piec
  * ```
  */
 export function evaluatePiecewiseMany(pp: PiecewisePolynomial, xs: ArrayLike<number>, out?: Float64Array): Float64Array {
+  const q = checkPiecewise(pp, "pp");
+  checkPoints(xs);
   const n = xs.length;
+  if (out !== undefined && !(out instanceof Float64Array && out.length >= n))
+    fail("output-invalid", ["out"], `The output must be a Float64Array of at least ${n} values (one per point); got ${describeValue(out)}.`);
   const result = out ?? new Float64Array(n);
-  const b = pp.breaks;
-  const c = pp.coefficients;
-  const d = pp.degree;
+  const b = q.breaks;
+  const c = q.coefficients;
+  const d = q.degree;
   const stride = d + 1;
   const last = b.length - 2;
   const x0 = b[0] as number;
@@ -158,11 +178,18 @@ export function evaluatePiecewiseMany(pp: PiecewisePolynomial, xs: ArrayLike<num
     // place the cursor on the piece of xs[j]: forward by steps for sorted points, by binary search when a point goes back
     const first = xs[j] as number;
     if (!(first >= x0 && first <= x1)) fail("outside-domain", ["xs", j], `x = ${first} lies outside [${x0}, ${x1}].`, { x: first });
-    if (first < (b[i] as number)) i = findPiece(pp, first, "right");
+    if (first < (b[i] as number)) i = locate(b, first, "right");
     while (i < last && first >= (b[i + 1] as number)) i++;
     // then evaluate the run of points that stay on this piece, its coefficients held in locals
     // (Horner's rule: the same operations in the same order as evaluatePolynomial)
-    j = evaluateRun(c, i * stride, d, b[i] as number, b[i + 1] as number, i === last, xs, j, result);
+    const next = evaluateRun(c, i * stride, d, b[i] as number, b[i + 1] as number, i === last, xs, j, result);
+    // breakpoints written to after the check (NaN, out of order) must not stall the walk
+    if (next === j) fail("piecewise-invalid", ["pp", "breaks"], "The breakpoints were changed after the piecewise polynomial was built.");
+    j = next;
+  }
+  for (let k = 0; k < n; k++) {
+    const v = result[k] as number;
+    if (v - v !== 0) overflow(["xs", k], `The value at x = ${xs[k]}`);
   }
   return result;
 }
@@ -258,6 +285,7 @@ export interface PolynomialPiece {
  * ```
  */
 export function piecesOf(pp: PiecewisePolynomial): readonly PolynomialPiece[] {
+  pp = checkPiecewise(pp, "pp");
   const stride = pp.degree + 1;
   const out: PolynomialPiece[] = [];
   for (let i = 0; i + 1 < pp.breaks.length; i++) {

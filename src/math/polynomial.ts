@@ -1,19 +1,6 @@
 // Polynomials stored as coefficient runs inside a Float64Array: c[off + k] multiplies t^k.
 
-/**
- * Evaluates the polynomial `c[off] + c[off+1] t + ... + c[off+degree] t^degree` at `t` by
- * Horner's rule.
- *
- * @param coefficients - coefficient storage; lowest power first.
- * @param offset - index of the constant term.
- * @param degree - highest power (0 for a constant).
- * @param t - the argument.
- * @returns the value of the polynomial.
- * @example
- * ```ts
- * evaluatePolynomial(new Float64Array([1, 0, 2]), 0, 2, 3); // 1 + 2 * 9 = 19
- * ```
- */
+/** Horner's rule on `c[off..off+degree]` at `t`, unchecked (for flexura's kernels; the checked form is in polynomial-api.ts). */
 export function evaluatePolynomial(coefficients: ArrayLike<number>, offset: number, degree: number, t: number): number {
   let v = coefficients[offset + degree] as number;
   for (let k = degree - 1; k >= 0; k--) v = v * t + (coefficients[offset + k] as number);
@@ -22,6 +9,21 @@ export function evaluatePolynomial(coefficients: ArrayLike<number>, offset: numb
 
 /** Scratch storage, one run per recursion level: derivative coefficients, interval ends, roots found. */
 const MAX_DEGREE = 8;
+/** Coefficients rescaled by a power of two when they are too large for the arithmetic. */
+const rescaled = new Float64Array(MAX_DEGREE + 1);
+/** Bound on |coefficient| and on sum |c_k| m^k under which values, derivatives and their products stay finite. */
+const SAFE_SIZE = 2 ** 1000;
+let overflowed = false;
+
+/**
+ * True when root finding since the last call met values beyond what a double can hold (its
+ * answer may then miss roots); clears the flag.
+ */
+export function takeRootOverflow(): boolean {
+  const o = overflowed;
+  overflowed = false;
+  return o;
+}
 const RUN = MAX_DEGREE + 2;
 const derivativeScratch = new Float64Array((MAX_DEGREE + 1) * (MAX_DEGREE + 1));
 const rootScratch = new Float64Array((MAX_DEGREE + 2) * RUN);
@@ -31,30 +33,7 @@ const rootScratch = new Float64Array((MAX_DEGREE + 2) * RUN);
  */
 export const scratchRoots = new Float64Array((MAX_DEGREE + 2) * RUN);
 
-/**
- * Finds the real roots of a polynomial in the closed interval `[lo, hi]`, in increasing order.
- *
- * Degree 1 and 2 use closed forms (the quadratic in its cancellation-free form); higher degrees
- * isolate each root between consecutive roots of the derivative (found recursively), where the
- * polynomial is monotone, and then converge by Newton's method kept inside the bracket with a
- * bisection safeguard, which always converges. A root where the
- * polynomial only touches zero (even multiplicity) is reported when the value at the
- * derivative's root is zero to rounding. A polynomial that is identically zero has no isolated
- * roots and returns none.
- *
- * @param coefficients - coefficient storage; lowest power first.
- * @param offset - index of the constant term.
- * @param degree - highest power; at most 8.
- * @param lo - start of the interval.
- * @param hi - end of the interval (`hi >= lo`).
- * @param out - receives the roots (appended).
- * @returns the number of roots appended.
- * @example
- * ```ts
- * const roots: number[] = [];
- * polynomialRootsIn(new Float64Array([-2, 0, 1]), 0, 2, 0, 5, roots); // roots = [1.4142135623730951]
- * ```
- */
+/** The roots in `[lo, hi]`, appended to `out`, unchecked (the checked form is in polynomial-api.ts). */
 export function polynomialRootsIn(coefficients: ArrayLike<number>, offset: number, degree: number, lo: number, hi: number, out: number[]): number {
   const count = rootsToScratch(coefficients, offset, degree, lo, hi);
   const start = out.length;
@@ -75,7 +54,33 @@ export function rootsToScratch(coefficients: ArrayLike<number>, offset: number, 
   let d = degree;
   while (d > 0 && coefficients[offset + d] === 0) d--;
   if (d === 0) return 0;
-  return rootsRecursive(coefficients, offset, d, lo, hi, 0);
+  // Roots do not change when the polynomial is scaled: coefficients too large for the arithmetic
+  // (values, derivatives, a discriminant) are scaled by a power of two, which is exact.
+  const m = Math.max(Math.abs(lo), Math.abs(hi));
+  let size = 0;
+  let big = 0;
+  let p = 1;
+  for (let k = 0; k <= d; k++) {
+    const a = Math.abs(coefficients[offset + k] as number);
+    size += a * p;
+    p *= m;
+    if (a > big) big = a;
+  }
+  if (size <= SAFE_SIZE && big <= SAFE_SIZE) return rootsRecursive(coefficients, offset, d, lo, hi, 0);
+  let scale = big > SAFE_SIZE ? 2 ** -Math.ceil(Math.log2(big)) : 1;
+  size = 0;
+  p = 1;
+  for (let k = 0; k <= d; k++) {
+    size += Math.abs(coefficients[offset + k] as number) * scale * p;
+    p *= m;
+  }
+  if (!(size < Infinity)) {
+    overflowed = true;
+    return 0;
+  }
+  if (size > SAFE_SIZE) scale *= 2 ** -(Math.ceil(Math.log2(size)) - 990);
+  for (let k = 0; k <= d; k++) rescaled[k] = (coefficients[offset + k] as number) * scale;
+  return rootsRecursive(rescaled, 0, d, lo, hi, 0);
 }
 
 /** Appends root `r` (clamped into [lo, hi] when within slack) to the run at `base` holding `n` roots; returns the new count. */
@@ -123,6 +128,7 @@ function rootsRecursive(c: ArrayLike<number>, off: number, d: number, lo: number
   for (let i = 1; i < n; i++) {
     const b = rootScratch[base + i] as number;
     const fb = evaluatePolynomial(c, off, d, b);
+    if (fb - fb !== 0) overflowed = true;
     if (fb === 0) {
       found = pushRoot(base, found, b, lo, hi);
     } else if (fa !== 0 && (fa < 0) !== (fb < 0)) {
@@ -137,7 +143,21 @@ function rootsRecursive(c: ArrayLike<number>, off: number, d: number, lo: number
   return found;
 }
 
+/** Coefficients beyond these magnitudes are scaled (by a power of two) before the quadratic formula, whose squares would overflow or underflow. */
+const QUADRATIC_HIGH = 2 ** 500;
+const QUADRATIC_LOW = 2 ** -500;
+
 function quadraticRoots(c0: number, c1: number, c2: number, lo: number, hi: number, base: number): number {
+  const big = Math.max(Math.abs(c0), Math.abs(c1), Math.abs(c2));
+  if (big > QUADRATIC_HIGH || big < QUADRATIC_LOW) {
+    // two powers of two, so that neither overflows when the coefficients are subnormal
+    const e = -Math.ceil(Math.log2(big));
+    const s1 = 2 ** Math.trunc(e / 2);
+    const s2 = 2 ** (e - Math.trunc(e / 2));
+    c0 = c0 * s1 * s2;
+    c1 = c1 * s1 * s2;
+    c2 = c2 * s1 * s2;
+  }
   const disc = c1 * c1 - 4 * c2 * c0;
   if (disc < 0) {
     // a double root lost to rounding: keep it when the vertex value is zero to rounding

@@ -7,6 +7,7 @@ import { diagramsOf, peaksInModelUnits } from "./diagrams.js";
 import type { Model } from "./model.js";
 import { sectionInSI, sectionResult, type SectionInSI } from "./model-section.js";
 import { plainResults } from "./plain.js";
+import { checkTypedModel } from "./typed-check.js";
 import { scaleOfUnits } from "./units.js";
 
 function fullScale(model: Model): ModelScale {
@@ -78,7 +79,8 @@ function refuseNotFinite(model: Model, where: IssuePath, value: number): never {
  *
  * @param model - A model from {@link parseModel}. It is not changed.
  * @returns Reactions, peaks, diagrams, section properties, stresses and checks.
- * @throws FlexuraError `result-not-finite` when a result (a deflection, a moment, a stress, a
+ * @throws FlexuraError `wrong-type`, `not-finite`, `not-an-option`, `too-many-items` for a model built in code whose
+ *   fields are not of their types (`length: "6"`, a load's `value: [3]`); `result-not-finite` when a result (a deflection, a moment, a stress, a
  *   utilisation) would be NaN or infinite in double precision, with the path of the input that
  *   caused it (`I`, `section`, `loads`, `limits.bendingStress`); the solver's codes (`mechanism`, `support-duplicate`, `stiffness-not-tiling`,
  *   ...; see docs/errors.md) with paths into the model; the section builders' codes under `section`;
@@ -94,6 +96,7 @@ function refuseNotFinite(model: Model, where: IssuePath, value: number): never {
  * ```
  */
 export function analyzeModel(model: Model): ModelAnalysis {
+  checkTypedModel(model);
   const scale = fullScale(model);
   const section = sectionInSI(model, scale);
   const solution = solve(model, scale, section);

@@ -58,6 +58,7 @@ export type {
 } from "./file-section.js";
 export type { ModelJsonSchema } from "./schema.js";
 export { modelSchema, MODEL_SCHEMA_ID } from "./schema.js";
+export { MODEL_LIST_LIMIT } from "./schema-parts.js";
 export { parseModel, tryParseModel } from "./parse.js";
 export { modelToJson } from "./to-json.js";
 export { DEFAULT_MODEL_UNITS } from "./units.js";

@@ -32,6 +32,8 @@ function readStiffness(reader: Reader, file: Readonly<Record<string, unknown>>, 
 
 function buildModel(json: unknown): Model {
   const structure = structuralIssues(json);
+  // A list over the size limit is refused before any of its items is read.
+  if (structure.some((i) => i.code === "too-many-items")) throw new FlexuraError(structure);
   const file = objectAt(json);
   const givenUnits = objectAt(file["units"]);
   const units = resolveUnits(givenUnits);
@@ -78,7 +80,8 @@ function buildModel(json: unknown): Model {
  * @param json - The model file, such as `JSON.parse(text)`. It is not changed.
  * @returns The model, every number in its own units.
  * @throws FlexuraError structural: `wrong-type`, `missing-field`, `unknown-field`, `field-not-allowed`,
- *   `not-an-option`, `unsupported-format`, `empty-string`, `too-few-items`, `not-finite`;
+ *   `not-an-option`, `unsupported-format`, `empty-string`, `too-few-items`, `not-finite`,
+ *   `too-many-items` (a list longer than {@link MODEL_LIST_LIMIT});
  *   units: `unit-syntax`, `unknown-unit`, `wrong-dimension`, `unit-missing`, `number-missing` and the
  *   other codes of `parseQuantity`; meaning: `value-not-positive`, `value-negative`,
  *   `support-outside-member`, `load-outside-member`, `load-range-empty`, `hinge-outside-member`,

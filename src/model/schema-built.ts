@@ -1,6 +1,6 @@
 // The plate girder and the built-up section of the model-file schema: shapes given by plates and
 // by parts rather than by named dimensions.
-import type { SchemaNode } from "./schema-parts.js";
+import { MODEL_LIST_LIMIT, type SchemaNode } from "./schema-parts.js";
 
 const length = (description: string): SchemaNode => ({ $ref: "#/$defs/sectionLength", description: `${description} (section-length unit)` });
 const angle = (description: string): SchemaNode => ({ $ref: "#/$defs/rotation", description: `${description} (rotation unit, radians by default)` });
@@ -71,7 +71,7 @@ const part = (type: string, title: string, description: string, fields: Readonly
 });
 
 const polygonPart = part("polygon", "a polygon part", "A simple polygon, corners in order (either winding), not repeated.", {
-  points: { type: "array", minItems: 3, items: { $ref: "#/$defs/point" }, description: "The corners, at least three." },
+  points: { type: "array", minItems: 3, maxItems: MODEL_LIST_LIMIT, items: { $ref: "#/$defs/point" }, description: "The corners, at least three." },
 });
 
 const circlePart = part("circle", "a circle part", "A full circle.", {
@@ -116,7 +116,7 @@ const builtUp: SchemaNode = {
   required: ["shape", "parts"],
   properties: {
     shape: { const: "built-up" },
-    parts: { type: "array", minItems: 1, items: { $ref: "#/$defs/sectionPart" }, description: "The parts, in order." },
+    parts: { type: "array", minItems: 1, maxItems: MODEL_LIST_LIMIT, items: { $ref: "#/$defs/sectionPart" }, description: "The parts, in order." },
   },
   additionalProperties: false,
 };

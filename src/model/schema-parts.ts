@@ -5,6 +5,13 @@
 /** A JSON Schema node as this module writes them (a plain JSON object or a boolean). */
 export type SchemaNode = boolean | { readonly [keyword: string]: unknown };
 
+/**
+ * The most items a list of a model file may hold (supports, hinges, loads, segments, section parts,
+ * polygon corners): parsing, analysing and drawing stay linear in the size of a model, and this
+ * bound keeps each under about a second; a longer list is refused with `too-many-items`.
+ */
+export const MODEL_LIST_LIMIT = 10_000;
+
 const ref = (name: string): SchemaNode => ({ $ref: `#/$defs/${name}` });
 
 const q = (def: string, description: string): SchemaNode => ({ $ref: `#/$defs/${def}`, description });

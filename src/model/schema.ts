@@ -1,5 +1,5 @@
 import { MODEL_FORMAT_VERSION } from "./model.js";
-import { definitions } from "./schema-parts.js";
+import { definitions, MODEL_LIST_LIMIT } from "./schema-parts.js";
 import { sectionDefinitions } from "./schema-section.js";
 
 /** Freezes plain data and everything it holds, so that no caller can change what it shares. */
@@ -60,14 +60,15 @@ export const modelSchema: ModelJsonSchema = deepFreeze({
     segments: {
       type: "array",
       minItems: 1,
+      maxItems: MODEL_LIST_LIMIT,
       items: { $ref: "#/$defs/segment" },
       description: "Stretches of constant E and I for a stepped member, covering it from 0 to its length.",
     },
     section: { $ref: "#/$defs/section" },
     material: { $ref: "#/$defs/material" },
-    supports: { type: "array", minItems: 1, items: { $ref: "#/$defs/support" }, description: "The supports of the member." },
-    hinges: { type: "array", items: { $ref: "#/$defs/length" }, description: "Positions of internal hinges (length unit)." },
-    loads: { type: "array", items: { $ref: "#/$defs/load" }, description: "The loads; all act together with factor 1." },
+    supports: { type: "array", minItems: 1, maxItems: MODEL_LIST_LIMIT, items: { $ref: "#/$defs/support" }, description: "The supports of the member." },
+    hinges: { type: "array", maxItems: MODEL_LIST_LIMIT, items: { $ref: "#/$defs/length" }, description: "Positions of internal hinges (length unit)." },
+    loads: { type: "array", maxItems: MODEL_LIST_LIMIT, items: { $ref: "#/$defs/load" }, description: "The loads; all act together with factor 1." },
     limits: { $ref: "#/$defs/limits" },
   },
   additionalProperties: false,

@@ -180,6 +180,12 @@ function walk(schema: SchemaNode, value: unknown, path: IssuePath, out: Sink, pa
     if (typeof minItems === "number" && value.length < minItems) {
       out.add(() => issue("too-few-items", path, `Give at least ${minItems} item${minItems === 1 ? "" : "s"} in "${last(path)}".`, { minItems }));
     }
+    const maxItems = node["maxItems"];
+    if (typeof maxItems === "number" && value.length > maxItems) {
+      // Refused whole: reading (and reporting on) every item of a list this long is the work the limit bounds.
+      out.add(() => issue("too-many-items", path, `"${last(path)}" holds ${value.length} items; a model may hold at most ${maxItems} in one list.`, { maxItems, count: value.length }));
+      return;
+    }
     const items = node["items"] as SchemaNode | undefined;
     if (items !== undefined) {
       for (let i = 0; i < value.length && !out.failed; i++) walk(items, value[i] as unknown, [...path, i], out, undefined);

@@ -12,6 +12,8 @@
  * ```
  */
 export function escapeXml(text: string): string {
+  // Most text (every coordinate list, most labels) needs nothing: return it as it is.
+  if (!NEEDS_WORK.test(text)) return text;
   let out = "";
   for (const ch of text) {
     switch (ch) {
@@ -36,6 +38,10 @@ export function escapeXml(text: string): string {
   }
   return out;
 }
+
+/** Any character that escapeXml changes or drops (markup, C0 controls bar tab/LF/CR, surrogates, U+FFFE/U+FFFF). */
+// eslint-disable-next-line no-control-regex
+const NEEDS_WORK = /[&<>"'\u0000-\u0008\u000b\u000c\u000e-\u001f\ud800-\udfff\ufffe\uffff]/;
 
 /** True for code points XML 1.0 allows in character data (XML 1.0, 5th ed., production [2] Char). */
 function isXmlChar(cp: number): boolean {

@@ -1,7 +1,7 @@
 export { escapeXml } from "./escape.js";
 export { svgNumber, svgElement, svgText, svgPolyline, svgPolygon, svgDocument, type SvgAttributes } from "./svg.js";
 export { formatReportNumber, formatReportQuantity, snapToZero, textTable } from "./format.js";
-export { sampleDiagram, diagramValueAt, type SampleDiagramOptions } from "./sample.js";
+export { sampleDiagram, diagramValueAt, SAMPLE_BUDGET, type SampleDiagramOptions } from "./sample.js";
 export { lineDiagramSvg, type LineDiagramData, type LineDiagramOptions, type DiagramPeak } from "./line-diagram.js";
 export type { MemberDrawing, DrawnSupport, DrawnSupportType, DrawnLoad } from "./member-drawing.js";
 export { memberSvg, type MemberSvgOptions } from "./member-svg.js";

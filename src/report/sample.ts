@@ -2,8 +2,26 @@ import type { ModelDiagram } from "../model/index.js";
 
 /** How densely to sample a diagram for drawing. */
 export interface SampleDiagramOptions {
-  /** Points per polynomial piece, ends included; default 48 (at least 2). */
+  /**
+   * Points per polynomial piece, ends included (at least 2). Default 48, fewer when the diagram
+   * has many pieces: about {@link SAMPLE_BUDGET} points in all, never fewer than the two ends of
+   * each piece; then a straight piece (degree 0 or 1) is drawn exactly by its two ends alone.
+   */
   readonly pointsPerPiece?: number;
+}
+
+/**
+ * About how many points a diagram is sampled at by default, whatever its number of pieces: a
+ * drawing 760 pixels wide shows no more, and the work (and the SVG's size) stays linear in the
+ * number of pieces instead of 48 points for each.
+ */
+export const SAMPLE_BUDGET = 4000;
+
+/** The degree of a piece, trailing zero coefficients aside. */
+function degreeOf(coefficients: readonly number[]): number {
+  let k = coefficients.length - 1;
+  while (k > 0 && coefficients[k] === 0) k--;
+  return k;
 }
 
 /**
@@ -23,11 +41,13 @@ export interface SampleDiagramOptions {
  * ```
  */
 export function sampleDiagram(diagram: ModelDiagram, options: SampleDiagramOptions = {}): readonly (readonly [number, number])[] {
-  const n = Math.max(2, Math.floor(options.pointsPerPiece ?? 48));
+  const pieces = diagram.pieces;
+  const given = options.pointsPerPiece;
+  const n = Math.max(2, Math.floor(given ?? Math.min(48, SAMPLE_BUDGET / Math.max(1, pieces.length))));
   const out: (readonly [number, number])[] = [];
-  for (const piece of diagram.pieces) {
+  for (const piece of pieces) {
     const width = piece.to - piece.from;
-    const count = width > 0 ? n : 1;
+    const count = width > 0 ? (given === undefined && degreeOf(piece.coefficients) <= 1 ? 2 : n) : 1;
     for (let i = 0; i < count; i++) {
       const t = count === 1 ? 0 : i / (count - 1);
       const x = i === count - 1 ? piece.to : piece.from + t * width;

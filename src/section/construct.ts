@@ -22,11 +22,12 @@ function frozenCopy<T>(value: T): T {
  * later calls skip the checks.
  *
  * Rules: polygons simple (either winding) with non-zero area; radii positive; every hole inside
- * the solid parts (checked at the hole's corners and edge midpoints); solid parts must not
+ * the solid parts (checked exactly: hole edges are split where solid boundaries meet them, and
+ * no gap between solids may lie inside a hole); solid parts must not
  * overlap each other (checked: parts whose bounding boxes overlap are tested by their exact
  * common area, circular arcs taken as eight chords each; a solid part lying inside a hole may
  * overlap the solid around that hole, since it fills part of the hole back); holes must not
- * overlap each other (not checked: their common area is taken away twice); either every solid
+ * overlap each other (checked by their common area, as for solids); either every solid
  * part has a material or none has. A hole without a material
  * takes the material of the solid it lies in.
  *
@@ -36,7 +37,8 @@ function frozenCopy<T>(value: T): T {
  *   `part-invalid`, `part-kind-unknown`, `point-invalid`, `not-a-number`, `not-finite`,
  *   `dimension-not-positive`, `polygon-degenerate`, `polygon-self-intersecting`,
  *   `sector-sweep-out-of-range`, `material-invalid`, `elastic-modulus-not-positive`,
- *   `yield-strength-not-positive`, `material-missing`, `hole-outside-solid`, `parts-overlap`,
+ *   `yield-strength-not-positive`, `material-missing`, `hole-outside-solid`, `holes-overlap`, `parts-overlap`,
+ *   `unknown-field`, `dimension-out-of-range`, `section-too-small`, `modular-ratio-out-of-range`,
  *   `section-area-not-positive`.
  * @example
  * ```ts

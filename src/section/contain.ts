@@ -63,6 +63,13 @@ export function containsPoint(edges: Float64Array, from: number, to: number, z: 
   return false;
 }
 
+/** The distance from (z, y) to the boundary made of edges [from, to). */
+export function boundaryDistance(edges: Float64Array, from: number, to: number, z: number, y: number): number {
+  let d = Infinity;
+  for (let o = from * STRIDE, end = to * STRIDE; o < end; o += STRIDE) d = Math.min(d, distanceToEdge(edges, o, z, y));
+  return d;
+}
+
 /** Points on the boundary of edges [from, to): every edge's start and middle, as flat [z, y, z, y, ...]. */
 export function boundarySamples(edges: Float64Array, from: number, to: number): number[] {
   const out: number[] = [];

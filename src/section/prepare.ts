@@ -1,7 +1,7 @@
 // Validation and compilation of a whole section into flat edge arrays, relative to the centre
 // of its bounding box (so that sections far from the origin keep their precision).
 import { IssueCollector, describeValue } from "../errors/index.js";
-import { boundarySamples, containsPoint } from "./contain.js";
+import { checkHoles } from "./holes.js";
 import { ARC, STRIDE, pushPartBoundary } from "./edges.js";
 import { sinExact, cosExact } from "./angles.js";
 import { addMoments } from "./integrals.js";
@@ -220,51 +220,15 @@ function compile(section: Section, found: IssueCollector): PreparedSection | und
     }
   }
 
-  // holes inside solids; a hole without a material takes its host's
-  for (let i = 0; i < count; i++) {
-    if (sign[i] === 1) continue;
-    const samples = boundarySamples(edges, edgeStart[i]!, edgeStart[i + 1]!);
-    const hits: number[] = new Array<number>(count).fill(0);
-    let outside = -1;
-    for (let s = 0; s < samples.length; s += 2) {
-      const z = samples[s]!;
-      const y = samples[s + 1]!;
-      let inAny = false;
-      for (let j = 0; j < count; j++) {
-        if (sign[j] !== 1) continue;
-        if (z < partBox[j * 4]! - tolerance || z > partBox[j * 4 + 1]! + tolerance) continue;
-        if (y < partBox[j * 4 + 2]! - tolerance || y > partBox[j * 4 + 3]! + tolerance) continue;
-        if (containsPoint(edges, edgeStart[j]!, edgeStart[j + 1]!, z, y, tolerance)) {
-          hits[j]!++;
-          inAny = true;
-        }
-      }
-      if (!inAny && outside < 0) outside = s;
-    }
-    if (outside >= 0) {
-      const at = { y: samples[outside + 1]! + refY, z: samples[outside]! + refZ };
-      found.add(
-        "hole-outside-solid",
-        ["parts", i],
-        `The hole reaches outside the solid parts (at y = ${at.y}, z = ${at.z}); keep it inside them.`,
-        { at },
-      );
-      continue;
-    }
-    let host = -1;
-    for (let j = 0; j < count; j++) if (host < 0 || hits[j]! > hits[host]!) host = j;
-    if (Number.isNaN(modulus[i]!)) {
-      modulus[i] = modulus[host]!;
-      yieldStrength[i] = yieldStrength[host]!;
-    }
-  }
-
   // each part's own moments, integrated once: they do not depend on the reference modulus
   let netArea = 0;
   for (let i = 0; i < count; i++) {
     addMoments(partMoments, edges, edgeStart[i]!, edgeStart[i + 1]!, 1, i * 6);
     netArea += sign[i]! * partMoments[i * 6]!;
   }
+
+  // holes inside solids and apart; a hole without a material takes its host's
+  checkHoles(found, { count, edges, edgeStart, sign, partBox, partMoments, modulus, yieldStrength }, tolerance, Math.max(box[1]! - box[0]!, box[3]! - box[2]!), { y: refY, z: refZ });
 
   checkOverlaps(found, { count, edges, edgeStart, sign, partBox, partMoments }, tolerance);
   if (found.empty && !(netArea > 1e-12 * (box[1]! - box[0]!) * (box[3]! - box[2]!))) {

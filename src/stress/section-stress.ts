@@ -4,6 +4,7 @@ import { bendingStressPlane, type BiaxialMoments } from "./biaxial.js";
 import { cornerStresses, type CornerStresses } from "./corners.js";
 import { checkPointsPerBand, findPeak, pointAt, profilePoints, type CutSource } from "./shear-peak.js";
 import type { ShearStressPoint, ShearStressProfile } from "./shear-profile.js";
+import { onBoundary } from "./section-boundary.js";
 import { candidatePoints, sectionLevels } from "./section-points.js";
 import { sectionWidthTerms } from "./section-width-terms.js";
 import { checkFibreInside } from "./validate.js";
@@ -144,7 +145,8 @@ export function trySectionPeakShearStress(shear: number, section: Section, optio
 /**
  * The bending stresses at the points of a section from the section module where a linear
  * stress field can be extreme (polygon corners, the points of circles and arcs along the stress
- * gradient, sector centres, fillet corners), under moments about both axes, with the most
+ * gradient, sector centres, fillet corners) that lie on the boundary of its material (a corner
+ * where parts meet inside the section, with material all round it, is left out), under moments about both axes, with the most
  * tensile and most compressive: the exact extremes over the section. The general formula of
  * `bendingStressPlane` (Boresi and Schmidt, Advanced Mechanics of Materials, 6th ed., Sec. 7.2,
  * from memory) on the section's I_z, I_y and I_yz. Points are relative to the centroid. For a
@@ -154,7 +156,7 @@ export function trySectionPeakShearStress(shear: number, section: Section, optio
  * @param moments - M_z (positive sagging) and M_y (force x length).
  * @param section - The section.
  * @param options - Reference modulus.
- * @returns The stresses at the candidate points (solid parts only).
+ * @returns The stresses at the candidate points on the boundary (solid parts' points only).
  * @throws FlexuraError the section module's codes, `product-moment-too-large`, `not-a-number` / `not-finite`.
  * @example
  * ```ts
@@ -164,10 +166,8 @@ export function trySectionPeakShearStress(shear: number, section: Section, optio
 export function sectionCornerStresses(moments: BiaxialMoments, section: Section, options?: SectionStressOptions): CornerStresses {
   const props = sectionProperties(section, options);
   const plane = bendingStressPlane(moments, props);
-  const points = section.parts
-    .filter((p) => p.hole !== true)
-    .flatMap((p) => candidatePoints(p, plane.perY, plane.perZ))
-    .map((p) => ({ y: p.y - props.centroid.y, z: p.z - props.centroid.z }));
+  const candidates = section.parts.filter((p) => p.hole !== true).flatMap((p) => candidatePoints(p, plane.perY, plane.perZ));
+  const points = onBoundary(section, candidates).map((p) => ({ y: p.y - props.centroid.y, z: p.z - props.centroid.z }));
   return cornerStresses(moments, props, points);
 }
 

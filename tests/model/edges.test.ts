@@ -1,6 +1,6 @@
 import { describe, expect, it } from "vitest";
 import { formatPath } from "../../src/errors/index.js";
-import { analyzeModel, DEFAULT_MODEL_UNITS, modelSchema, parseModel, tryAnalyzeModel, tryParseModel } from "../../src/model/index.js";
+import { analyzeModel, DEFAULT_MODEL_UNITS, MODEL_LIST_LIMIT, modelSchema, parseModel, tryAnalyzeModel, tryParseModel } from "../../src/model/index.js";
 
 // An invented simple span: 6 m, E = 200 GPa, I = 8.5e7 mm^4, 10 kN at midspan.
 const base = (): Record<string, unknown> => ({
@@ -124,5 +124,72 @@ describe("results that are not finite are refused", () => {
     const r = tryAnalyzeModel(parseModel({ ...base(), I: undefined, section: { shape: "rectangle", width: 100, depth: 200 }, limits: { bendingStress: 1e-320 } }));
     expect(r.ok).toBe(false);
     if (!r.ok) expect(r.error.issues.map((i) => `${formatPath(i.path)} [${i.code}]`)).toEqual(["limits.bendingStress [result-not-finite]"]);
+  });
+});
+
+describe("a model built in code meets typed errors, never JavaScript's conversions", () => {
+  const model = parseModel(base());
+  const codesOf = (m: unknown): string[] => {
+    const r = tryAnalyzeModel(m as never);
+    return r.ok ? [] : r.error.issues.map((i) => `${formatPath(i.path)} [${i.code}]`);
+  };
+
+  it("an array nested 20,000 deep where a number is due is wrong-type, not a RangeError", () => {
+    let deep: unknown = 6;
+    for (let i = 0; i < 20000; i++) deep = [deep];
+    expect(codesOf({ ...model, length: deep })).toEqual(["length [wrong-type]"]);
+    expect(codesOf({ ...model, hinges: [deep] })).toEqual(["hinges[0] [wrong-type]"]);
+  });
+
+  it("numbers written as strings or one-item lists are refused, not converted", () => {
+    expect(codesOf({ ...model, length: "6" })).toEqual(["length [wrong-type]"]);
+    expect(codesOf({ ...model, length: [6] })).toEqual(["length [wrong-type]"]);
+    expect(codesOf({ ...model, loads: [{ kind: "point", at: 3, value: [10] }] })).toEqual(["loads[0].value [wrong-type]"]);
+    expect(codesOf({ ...model, limits: { deflection: { kind: "ratio", ratio: [360] } } })).toEqual(["limits.deflection.ratio [wrong-type]"]);
+  });
+
+  it("missing or null containers are typed errors", () => {
+    expect(codesOf(null)).toEqual(["(input) [wrong-type]"]);
+    expect(codesOf({ ...model, units: null })).toEqual(["units [wrong-type]"]);
+    expect(codesOf({ ...model, loads: null })).toEqual(["loads [wrong-type]"]);
+    expect(codesOf({ ...model, loads: [null] })).toEqual(["loads[0] [wrong-type]"]);
+    expect(codesOf({ ...model, limits: null })).toEqual(["limits [wrong-type]"]);
+    expect(codesOf({ ...model, supports: [{}] })).toEqual(["supports[0].kind [not-an-option]", "supports[0].at [wrong-type]"]);
+    expect(codesOf({ ...model, section: { shape: "built-up", parts: [{ kind: "polygon", hole: false, points: [null] }] }, I: undefined })).toEqual(["section.parts[0].points[0] [wrong-type]"]);
+    expect(codesOf({ ...model, E: Number.NaN })).toEqual(["E [not-finite]"]);
+  });
+
+  it("fields inherited from a prototype are not read", () => {
+    const inherited = Object.assign(Object.create({ length: 6 }) as object, { ...model, length: undefined });
+    expect(codesOf(inherited)).toEqual(["length [wrong-type]"]);
+  });
+
+  it("a sound model built in code analyses as the parsed one does", () => {
+    expect(analyzeModel({ ...model }).reactions).toEqual(analyzeModel(model).reactions);
+  });
+});
+
+describe("bounded work: a size limit on every list", () => {
+  it("a list longer than MODEL_LIST_LIMIT is refused with too-many-items before any item is read", () => {
+    const loads = Array.from({ length: MODEL_LIST_LIMIT + 1 }, () => ({ type: "point", at: 3, value: "not a force" }));
+    expect(problems({ ...base(), loads })).toEqual(["loads [too-many-items]"]);
+    expect(problems({ ...base(), hinges: new Array<number>(MODEL_LIST_LIMIT + 1).fill(3) })).toEqual(["hinges [too-many-items]"]);
+    const model = parseModel(base());
+    const r = tryAnalyzeModel({ ...model, loads: new Array(MODEL_LIST_LIMIT + 1).fill(model.loads[0]) });
+    expect(r.ok || r.error.issues.map((i) => `${formatPath(i.path)} [${i.code}]`)).toEqual(["loads [too-many-items]"]);
+  });
+
+  it("the published schema carries the same limit", () => {
+    const properties = modelSchema["properties"] as Record<string, { maxItems?: number }>;
+    expect(properties["loads"]?.maxItems).toBe(MODEL_LIST_LIMIT);
+    expect(properties["supports"]?.maxItems).toBe(MODEL_LIST_LIMIT);
+  });
+
+  it("5,000 point loads (within the limit) analyse, with every load kept", () => {
+    const loads = Array.from({ length: 5000 }, (_, i) => ({ type: "point", at: (6 * (i + 0.5)) / 5000, value: 0.002 }));
+    const a = analyzeModel(parseModel({ ...base(), loads }));
+    // Total load 10 kN, symmetric: each reaction 5 kN (statics).
+    expect(a.reactions[0]?.force).toBeCloseTo(5, 9);
+    expect(a.reactions[1]?.force).toBeCloseTo(5, 9);
   });
 });

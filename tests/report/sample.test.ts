@@ -1,6 +1,6 @@
 import { fc, test } from "@fast-check/vitest";
 import { describe, expect } from "vitest";
-import { diagramValueAt, sampleDiagram } from "../../src/report/index.js";
+import { diagramValueAt, SAMPLE_BUDGET, sampleDiagram } from "../../src/report/index.js";
 import { evaluatePolynomial } from "../../src/report/sample.js";
 
 // Shear under a point load P = 10 at midspan of a 4 m simple span: +5 then -5
@@ -29,6 +29,23 @@ describe("sampleDiagram", () => {
       for (const [x, v] of pts) expect(v).toBe(evaluatePolynomial(coefficients, x));
     },
   );
+});
+
+describe("sampleDiagram on a diagram of many pieces", () => {
+  // 5,000 pieces of a cubic (a deflection under 5,000 point loads) and of a straight line (its moment).
+  const many = (coefficients: readonly number[]) => ({ unit: "", pieces: Array.from({ length: 5000 }, (_, i) => ({ from: i, to: i + 1, coefficients })) });
+  test("at most about SAMPLE_BUDGET points, and never fewer than every piece's ends", () => {
+    const pts = sampleDiagram(many([1, 2, 3, 4]));
+    expect(pts.length).toBeLessThanOrEqual(2 * 5000 + SAMPLE_BUDGET);
+    for (let i = 0; i <= 5000; i++) expect(pts.some(([x]) => x === i)).toBe(true);
+  });
+  test("a straight piece is drawn by its two ends alone (exact for a line)", () => {
+    expect(sampleDiagram({ unit: "", pieces: [{ from: 0, to: 4, coefficients: [1, 2, 0, 0] }] })).toEqual([[0, 1], [4, 9]]);
+    expect(sampleDiagram(many([0, 1])).length).toBe(2 * 5000);
+  });
+  test("a few curved pieces still get 48 points each", () => {
+    expect(sampleDiagram({ unit: "", pieces: [{ from: 0, to: 1, coefficients: [0, 0, 1] }] })).toHaveLength(48);
+  });
 });
 
 describe("evaluatePolynomial and diagramValueAt", () => {
