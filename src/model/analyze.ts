@@ -1,5 +1,5 @@
 import { solveBeam, type BeamSolution } from "../beam/index.js";
-import { attempt, fail, FlexuraError, formatPath, isFlexuraError, type FlexuraIssue, type IssuePath, type Result } from "../errors/index.js";
+import { attempt, FlexuraError, isFlexuraError, type FlexuraIssue, type Result } from "../errors/index.js";
 import type { ModelAnalysis, ModelScale, ModelWarning } from "./analysis.js";
 import { beamInputInSI } from "./beam-input.js";
 import { modelVerdicts } from "./checks.js";
@@ -7,6 +7,7 @@ import { diagramsOf, peaksInModelUnits } from "./diagrams.js";
 import type { Model } from "./model.js";
 import { sectionInSI, sectionResult, type SectionInSI } from "./model-section.js";
 import { plainResults } from "./plain.js";
+import { refuseNotFinite, stiffnessPath } from "./not-finite.js";
 import { checkTypedModel } from "./typed-check.js";
 import { scaleOfUnits } from "./units.js";
 
@@ -16,9 +17,6 @@ function fullScale(model: Model): ModelScale {
   if (found.length > 0) throw new FlexuraError(found);
   return scale as ModelScale;
 }
-
-/** Where the member's stiffness comes from in the model. */
-const stiffnessPath = (model: Model): IssuePath => (model.segments === undefined ? (model.I === undefined ? ["section"] : ["I"]) : ["segments"]);
 
 /** Beam issues point at the solver's input; point them at the model's fields instead. */
 function toModelPath(i: FlexuraIssue, model: Model): FlexuraIssue {
@@ -45,24 +43,6 @@ function solve(model: Model, scale: ModelScale, section: SectionInSI | undefined
 function axesInclined(section: SectionInSI): boolean {
   const p = section.properties;
   return Math.abs(p.productMoment) > 1e-9 * Math.sqrt(p.secondMomentY * p.secondMomentZ);
-}
-
-/**
- * Refuses a result that double precision cannot hold (a member so flexible, or loads so large,
- * that a deflection or moment overflows), pointing at the input that most likely caused it.
- */
-function refuseNotFinite(model: Model, where: IssuePath, value: number): never {
-  const [head, second] = where;
-  const field = head === "diagrams" ? second : head;
-  const cause: IssuePath =
-    field === "slope" || field === "deflection" ? stiffnessPath(model) : field === "section" || field === "stress" ? ["section"] : field === "checks" ? ["limits"] : ["loads"];
-  const hint =
-    field === "slope" || field === "deflection"
-      ? "the member is too flexible for the loads: check the units and size of E and I"
-      : field === "section" || field === "stress"
-        ? "check the section's dimensions and units"
-        : "check the sizes and units of the loads and supports";
-  fail("result-not-finite", cause, `The result ${formatPath(where)} is ${value}, beyond what double precision can hold: ${hint}.`, { result: formatPath(where), value: String(value) });
 }
 
 /**

@@ -1,5 +1,6 @@
 import { describe, expect, it } from "vitest";
-import { formatPath } from "../../src/errors/index.js";
+import { formatPath, isFlexuraError } from "../../src/errors/index.js";
+import { refuseNotFinite } from "../../src/model/not-finite.js";
 import { analyzeModel, DEFAULT_MODEL_UNITS, MODEL_LIST_LIMIT, modelSchema, parseModel, tryAnalyzeModel, tryParseModel } from "../../src/model/index.js";
 
 // An invented simple span: 6 m, E = 200 GPa, I = 8.5e7 mm^4, 10 kN at midspan.
@@ -191,5 +192,30 @@ describe("bounded work: a size limit on every list", () => {
     // Total load 10 kN, symmetric: each reaction 5 kN (statics).
     expect(a.reactions[0]?.force).toBeCloseTo(5, 9);
     expect(a.reactions[1]?.force).toBeCloseTo(5, 9);
+  });
+});
+
+describe("refuseNotFinite names the input behind a result that is not finite", () => {
+  const model = parseModel(base());
+  const at = (where: (string | number)[], m = model): string => {
+    try {
+      refuseNotFinite(m, where, Number.POSITIVE_INFINITY);
+    } catch (e) {
+      return isFlexuraError(e) ? `${formatPath(e.issues[0]?.path ?? [])} [${e.code}]` : "raw";
+    }
+    return "returned";
+  };
+  it("deflections and slopes point at the stiffness; stresses at the section; reactions and moments at the loads; checks at the limits", () => {
+    expect(at(["deflection", "min", "value"])).toBe("I [result-not-finite]");
+    expect(at(["diagrams", "slope", "pieces", 0])).toBe("I [result-not-finite]");
+    const { I: _I, ...withoutI } = model;
+    expect(at(["deflection"], withoutI)).toBe("section [result-not-finite]");
+    expect(at(["deflection"], { ...model, segments: [] })).toBe("segments [result-not-finite]");
+    expect(at(["stress", "tension", "value"])).toBe("section [result-not-finite]");
+    expect(at(["section", "area"])).toBe("section [result-not-finite]");
+    expect(at(["reactions", 0, "force"])).toBe("loads [result-not-finite]");
+    expect(at(["diagrams", "moment"])).toBe("loads [result-not-finite]");
+    expect(at(["checks", 0, "utilisation"])).toBe("limits [result-not-finite]");
+    expect(at(["constructor"])).toBe("loads [result-not-finite]");
   });
 });
