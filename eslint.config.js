@@ -3,7 +3,7 @@ import js from "@eslint/js";
 import tseslint from "typescript-eslint";
 
 export default tseslint.config(
-  { ignores: ["dist/", "coverage/", "docs/api/", "node_modules/", ".tmp/", "out/", "**/*.mjs", "**/*.js"] },
+  { ignores: ["dist/", "coverage/", "docs/api/", "node_modules/", ".tmp/", ".stryker-tmp/", "reports/", "out/", "**/*.mjs", "**/*.js"] },
   js.configs.recommended,
   ...tseslint.configs.recommendedTypeChecked,
   {

@@ -10,6 +10,7 @@ export const entries = {
   report: "src/report/index.ts",
   stress: "src/stress/index.ts",
   check: "src/check/index.ts",
+  sheet: "src/sheet/index.ts",
 } as const;
 
 /**

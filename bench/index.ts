@@ -11,6 +11,7 @@ import "./stress.bench.js";
 import "./check.bench.js";
 import "./section.bench.js";
 import "./model.bench.js";
+import "./sheet.bench.js";
 
 const pattern = process.argv[2];
 await runAll(pattern ? new RegExp(pattern) : undefined);

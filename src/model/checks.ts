@@ -14,7 +14,7 @@ import {
   type PeakBendingStress,
   type SpanDeflection,
 } from "../check/index.js";
-import { FlexuraError, isFlexuraError } from "../errors/index.js";
+import { FlexuraError, isFlexuraError, type IssuePath } from "../errors/index.js";
 import type { ModelCheck, ModelScale, ModelStress, ModelStressExtreme, ModelWarning } from "./analysis.js";
 import type { Model, ModelDeflectionLimit } from "./model.js";
 import { isMultiMaterial, type SectionInSI } from "./model-section.js";
@@ -130,6 +130,14 @@ function partAllowables(model: Model, section: ModelBuiltUpSection, scale: Model
   return { byPart, unchecked: byPart.some((b) => b !== null) ? unchecked : [] };
 }
 
+/** A path into the check module's limits as a path into the model: a part's allowable is its own `bendingStress`, else the common one. */
+function limitPathInModel(model: Model, path: IssuePath): IssuePath {
+  if (path[1] !== "bendingStressByPart" || typeof path[2] !== "number") return path;
+  const section = model.section;
+  const part = section !== undefined && isMultiMaterial(section) ? section.parts[path[2]] : undefined;
+  return part?.bendingStress === undefined ? ["limits", "bendingStress"] : ["section", "parts", path[2], "bendingStress"];
+}
+
 /** Runs the check module on a member with a section; its problems are reported under `section`. */
 function withSection(model: Model, solution: BeamSolution, section: SectionInSI, scale: ModelScale, warnings: ModelWarning[]): ModelVerdicts {
   const multi = model.section !== undefined && isMultiMaterial(model.section) ? partAllowables(model, model.section, scale) : undefined;
@@ -149,7 +157,7 @@ function withSection(model: Model, solution: BeamSolution, section: SectionInSI,
     r = anyLimit ? checkMember(solution, member, limits) : { checks: [], stresses: memberStresses(solution, member), deflections: [] };
   } catch (e) {
     if (!isFlexuraError(e)) throw e;
-    throw new FlexuraError(e.issues.map((i) => ({ ...i, path: i.path[0] === "limits" ? i.path : ["section"] })));
+    throw new FlexuraError(e.issues.map((i) => ({ ...i, path: i.path[0] === "limits" ? limitPathInModel(model, i.path) : ["section"] })));
   }
   // checkMember gives the bending checks of the parts in part order, tension then compression.
   const checkedParts = multi?.byPart.flatMap((b, i) => (b === null ? [] : [i])) ?? [];

@@ -1,5 +1,5 @@
 import type { Decimal } from "decimal.js";
-import { exact } from "./decimal.js";
+import { exact, handOut } from "./decimal.js";
 import type { Dimension } from "./kinds.js";
 
 /**
@@ -65,16 +65,8 @@ const ROWS: readonly Row[] = [
   ["rad", ["radian", "radians"], "radian", A, "1"],
 ];
 
-/**
- * Every unit symbol flexura knows, in the order documented in docs/units.md. Units built from
- * these by the grammar (`kN*m`, `N/mm^2`, `in^4`, `kip*ft/rad`) need no entry of their own.
- *
- * @example
- * ```ts
- * unitCatalog.find((u) => u.symbol === "in")?.numerator.toString(); // "0.0254"
- * ```
- */
-export const unitCatalog: readonly CatalogUnit[] = Object.freeze(
+/** The catalogue as flexura computes with it (its decimals are never handed out). */
+const OWN: readonly CatalogUnit[] = Object.freeze(
   ROWS.map(([symbol, aliases, name, dimension, numerator, denominator]) =>
     Object.freeze({
       symbol,
@@ -87,8 +79,27 @@ export const unitCatalog: readonly CatalogUnit[] = Object.freeze(
   ),
 );
 
+/**
+ * Every unit symbol flexura knows, in the order documented in docs/units.md. Units built from
+ * these by the grammar (`kN*m`, `N/mm^2`, `in^4`, `kip*ft/rad`) need no entry of their own.
+ *
+ * Frozen all the way down, digits of the decimals included; the decimals are copies made with
+ * a Decimal constructor flexura does not compute with, so nothing done to them (or to their
+ * constructor's settings) changes a conversion.
+ *
+ * @example
+ * ```ts
+ * unitCatalog.find((u) => u.symbol === "in")?.numerator.toString(); // "0.0254"
+ * ```
+ */
+export const unitCatalog: readonly CatalogUnit[] = Object.freeze(
+  OWN.map((u) =>
+    Object.freeze({ ...u, numerator: handOut(u.numerator), denominator: handOut(u.denominator) }),
+  ),
+);
+
 const BY_SPELLING: ReadonlyMap<string, CatalogUnit> = new Map(
-  unitCatalog.flatMap((u) => [[u.symbol, u] as const, ...u.aliases.map((a) => [a, u] as const)]),
+  OWN.flatMap((u) => [[u.symbol, u] as const, ...u.aliases.map((a) => [a, u] as const)]),
 );
 
 /** The catalogue entry for a symbol or alias, if there is one (case-sensitive). */

@@ -1,5 +1,6 @@
 import { attempt, FlexuraError, issue, IssueCollector, requireFinite, type FlexuraIssue, type IssuePath, type Result } from "../errors/index.js";
 import { describeDimension, sameDimension } from "./kinds.js";
+import { optionsPath } from "./options.js";
 import { rescale } from "./scale.js";
 import { resolveUnit, type UnitFactor } from "./unit.js";
 
@@ -42,7 +43,8 @@ function resolvePair(fromUnit: unknown, toUnit: unknown, path: IssuePath, found:
  * @param options - See {@link ConvertOptions}.
  * @returns The number of `toUnit`s.
  * @throws FlexuraError `not-a-number`, `not-finite` (value); `unit-not-a-string`, `unit-empty`,
- *   `unit-syntax`, `unknown-unit` (either unit); `incompatible-units`; `number-out-of-range`.
+ *   `unit-syntax`, `unknown-unit`, `unit-out-of-range` (either unit); `incompatible-units`; `number-out-of-range`;
+ *   `options-invalid` (options not an object, or a path that is not a list of names and indices).
  * @example
  * ```ts
  * convert(1, "in", "mm");       // 25.4
@@ -51,7 +53,7 @@ function resolvePair(fromUnit: unknown, toUnit: unknown, path: IssuePath, found:
  * ```
  */
 export function convert(value: number, fromUnit: string, toUnit: string, options?: ConvertOptions): number {
-  const path = options?.path ?? [];
+  const path = optionsPath(options);
   const found: FlexuraIssue[] = [];
   const collector = new IssueCollector();
   const finite = requireFinite(collector, value, [...path, "value"], "value to convert");
@@ -88,7 +90,7 @@ export function tryConvert(value: number, fromUnit: string, toUnit: string, opti
  * @param options - See {@link ConvertOptions}.
  * @returns The multiplier from `fromUnit` to `toUnit`.
  * @throws FlexuraError `unit-not-a-string`, `unit-empty`, `unit-syntax`, `unknown-unit`, `incompatible-units`,
- *   `number-out-of-range` (a ratio beyond a JavaScript number, possible only with extreme powers).
+ *   `unit-out-of-range`, `number-out-of-range` (a ratio beyond a JavaScript number, possible only with extreme powers), `options-invalid`.
  * @example
  * ```ts
  * const k = conversionFactor("kip*ft", "kN*m"); // 1.3558179483314003
@@ -96,11 +98,12 @@ export function tryConvert(value: number, fromUnit: string, toUnit: string, opti
  * ```
  */
 export function conversionFactor(fromUnit: string, toUnit: string, options?: ConvertOptions): number {
+  const path = optionsPath(options);
   const found: FlexuraIssue[] = [];
-  const pair = resolvePair(fromUnit, toUnit, options?.path ?? [], found);
+  const pair = resolvePair(fromUnit, toUnit, path, found);
   if (pair === undefined) throw new FlexuraError(found);
   const [from, to] = pair;
-  const ratio = rescale(1, from, to, options?.path ?? [], () => `1 ${from.unit}`);
+  const ratio = rescale(1, from, to, path, () => `1 ${from.unit}`);
   if (typeof ratio !== "number") throw new FlexuraError([ratio]);
   return ratio;
 }

@@ -1,5 +1,6 @@
-import { attempt, FlexuraError, issue, IssueCollector, requireFinite, type FlexuraIssue, type Result } from "../errors/index.js";
+import { attempt, describeValue, fail, FlexuraError, issue, IssueCollector, requireFinite, type FlexuraIssue, type Result } from "../errors/index.js";
 import { describeDimension, sameDimension } from "./kinds.js";
+import { readOptions } from "./options.js";
 import { rescale } from "./scale.js";
 import { resolveUnit } from "./unit.js";
 
@@ -48,7 +49,8 @@ function checkDigits(found: FlexuraIssue[], value: number | undefined, name: str
  * @param options - See {@link FormatQuantityOptions}.
  * @returns The number, a space and the unit (just the number when `unit` is `""`).
  * @throws FlexuraError `not-a-number`, `not-finite` (value); `unit-not-a-string`, `unit-syntax`,
- *   `unknown-unit` (`unit` or `from`); `incompatible-units`; `format-digits-out-of-range`; `number-out-of-range`.
+ *   `unknown-unit`, `unit-out-of-range` (`unit` or `from`); `incompatible-units`; `format-digits-out-of-range`; `number-out-of-range`;
+ *   `options-invalid` (options not an object, or an unknown `style`).
  * @example
  * ```ts
  * formatQuantity(12345, "kN*m");                      // "12.35 kN*m" (12345 N*m)
@@ -57,6 +59,9 @@ function checkDigits(found: FlexuraIssue[], value: number | undefined, name: str
  * ```
  */
 export function formatQuantity(value: number, unit: string, options?: FormatQuantityOptions): string {
+  const style = readOptions(options)?.["style"];
+  if (style !== undefined && style !== "plain" && style !== "pretty")
+    fail("options-invalid", ["options", "style"], `The style must be "plain" or "pretty"; got ${describeValue(style)}.`);
   const found: FlexuraIssue[] = [];
   const collector = new IssueCollector();
   const finite = requireFinite(collector, value, ["value"], "value to format");

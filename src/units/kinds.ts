@@ -5,6 +5,7 @@
  * exponent that is tracked only to tell a moment (kN*m) from a rotational stiffness (kN*m/rad).
  * As in the SI, the radian is dimensionless: 1 rad = 1.
  */
+import { describeValue, fail } from "../errors/index.js";
 
 /**
  * The name of a kind of quantity. Each has one dimension (length^a force^b):
@@ -98,12 +99,16 @@ const DIMENSIONS: Readonly<Record<QuantityKind, Dimension>> = Object.freeze({
 /**
  * The dimension of a kind of quantity.
  *
+ * @throws FlexuraError `unknown-quantity-kind` when `kind` is not one of {@link quantityKinds}
+ *   (looked up as an own property: `"constructor"` is not a kind).
  * @example
  * ```ts
  * dimensionOfKind("stress"); // { length: -2, force: 1, angle: 0 }
  * ```
  */
 export function dimensionOfKind(kind: QuantityKind): Dimension {
+  if (!isQuantityKind(kind))
+    fail("unknown-quantity-kind", ["kind"], `${describeValue(kind)} is not a kind of quantity; use one of ${quantityKinds.join(", ")}.`, { value: describeValue(kind) });
   return DIMENSIONS[kind];
 }
 

@@ -2,6 +2,7 @@ import { attempt, describeValue, FlexuraError, issue, type FlexuraIssue, type Is
 import { checkFits, checkKind } from "./check.js";
 import { dimensionOfKind, fitsDimension, isQuantityKind, type QuantityKind } from "./kinds.js";
 import { readLeadingNumber } from "./number.js";
+import { optionsPath } from "./options.js";
 import { rescale } from "./scale.js";
 import { resolveUnit, type UnitFactor } from "./unit.js";
 import { KIND_WORDS, kindExamples } from "./words.js";
@@ -103,7 +104,7 @@ export function readQuantity(text: unknown, kind: unknown, path: IssuePath, foun
  * @param options - See {@link ParseQuantityOptions}.
  * @returns The quantity, `value` in SI base units.
  * @throws FlexuraError `quantity-not-a-string`, `quantity-empty`, `number-missing`, `number-out-of-range`,
- *   `unit-missing`, `unit-syntax`, `unknown-unit`, `wrong-dimension`, `unknown-quantity-kind`.
+ *   `unit-missing`, `unit-syntax`, `unknown-unit`, `unit-out-of-range`, `wrong-dimension`, `unknown-quantity-kind`, `options-invalid`.
  * @example
  * ```ts
  * parseQuantity("1.5 kip/ft", "forcePerLength").value; // 21890.854405809547 (N/m)
@@ -113,7 +114,7 @@ export function readQuantity(text: unknown, kind: unknown, path: IssuePath, foun
  */
 export function parseQuantity(text: string, kind: QuantityKind, options?: ParseQuantityOptions): Quantity {
   const found: FlexuraIssue[] = [];
-  const read = readQuantity(text, kind, options?.path ?? [], found);
+  const read = readQuantity(text, kind, optionsPath(options), found);
   if (read === undefined || found.length > 0) throw new FlexuraError(found);
   return read.quantity;
 }
@@ -141,7 +142,7 @@ export function tryParseQuantity(text: string, kind: QuantityKind, options?: Par
  * @param options - See {@link ParseQuantityOptions}; issues about `toUnit` get the path plus `"toUnit"`.
  * @returns The number of `toUnit`s.
  * @throws FlexuraError the codes of {@link parseQuantity}, and for `toUnit`: `unit-not-a-string`,
- *   `unit-empty`, `unit-syntax`, `unknown-unit`, `wrong-dimension`.
+ *   `unit-empty`, `unit-syntax`, `unknown-unit`, `unit-out-of-range`, `wrong-dimension`.
  * @example
  * ```ts
  * convertQuantity("29000 ksi", "stress", "MPa"); // 199947.961...
@@ -149,7 +150,7 @@ export function tryParseQuantity(text: string, kind: QuantityKind, options?: Par
  * ```
  */
 export function convertQuantity(text: string, kind: QuantityKind, toUnit: string, options?: ParseQuantityOptions): number {
-  const path = options?.path ?? [];
+  const path = optionsPath(options);
   const found: FlexuraIssue[] = [];
   const read = readQuantity(text, kind, path, found);
   const to = resolveUnit(toUnit, [...path, "toUnit"]);

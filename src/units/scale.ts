@@ -1,6 +1,6 @@
 import { issue, type FlexuraIssue, type IssuePath } from "../errors/index.js";
 import { ExactDecimal } from "./decimal.js";
-import { smallRatioOf, type UnitFactor } from "./unit.js";
+import { exactPartsOf, smallRatioOf, type UnitFactor } from "./unit.js";
 
 
 /**
@@ -63,12 +63,14 @@ export function exactRescale(text: string, from: UnitFactor | undefined, to: Uni
   let top = new ExactDecimal(text);
   let bottom = new ExactDecimal(1);
   if (from !== undefined) {
-    top = top.times(from.numerator);
-    bottom = bottom.times(from.denominator);
+    const [n, d] = exactPartsOf(from);
+    top = top.times(n);
+    bottom = bottom.times(d);
   }
   if (to !== undefined) {
-    top = top.times(to.denominator);
-    bottom = bottom.times(to.numerator);
+    const [n, d] = exactPartsOf(to);
+    top = top.times(d);
+    bottom = bottom.times(n);
   }
   return top.div(bottom).toNumber();
 }

@@ -1,4 +1,5 @@
-import type { QuantityKind } from "./kinds.js";
+import { describeValue, fail } from "../errors/index.js";
+import { isQuantityKind, type QuantityKind } from "./kinds.js";
 
 /**
  * What a unit system gives a unit for: every {@link QuantityKind}, plus two display roles that
@@ -162,6 +163,7 @@ export const unitSystems: Readonly<Record<UnitSystemName, UnitSystem>> = Object.
  * The kind of quantity a display role holds: `deflection` and `sectionLength` are lengths, `modulus` a stress,
  * and every other role is its own kind.
  *
+ * @throws FlexuraError `unknown-display-role` when `role` is not a {@link DisplayRole} (looked up as an own property).
  * @example
  * ```ts
  * kindOfRole("deflection"); // "length"
@@ -175,6 +177,9 @@ export function kindOfRole(role: DisplayRole): QuantityKind {
     case "modulus":
       return "stress";
     default:
-      return role;
+      if (isQuantityKind(role)) return role;
+      return fail("unknown-display-role", ["role"], `${describeValue(role)} is not a display role; use a kind of quantity, "deflection", "sectionLength" or "modulus".`, {
+        value: describeValue(role),
+      });
   }
 }

@@ -1,8 +1,9 @@
 import type { Decimal } from "decimal.js";
 import { attempt, describeValue, FlexuraError, issue, type FlexuraIssue, type IssuePath, type Result } from "../errors/index.js";
-import { ONE } from "./decimal.js";
+import { ExactDecimal, handOut, ONE } from "./decimal.js";
 import { MAX_POWER, parseUnitExpression, printUnitExpression, symbolsOf, type UnitExpression, type UnitTerm } from "./grammar.js";
-import { kindsOfDimension, type Dimension, type QuantityKind } from "./kinds.js";
+import { describeDimension, kindsOfDimension, type Dimension, type QuantityKind } from "./kinds.js";
+import { optionsPath } from "./options.js";
 import { suggestUnits } from "./suggest.js";
 
 /**
@@ -39,6 +40,8 @@ export interface UnitFactorOptions {
 }
 
 const CACHE_LIMIT = 256;
+/** The smallest positive normal double (2^-1022). */
+const MIN_NORMAL = 2 ** -1022;
 const cache = new Map<string, UnitFactor>();
 
 interface Accumulated {
@@ -83,11 +86,19 @@ export interface SmallRatio {
 }
 
 const SMALL = new WeakMap<UnitFactor, SmallRatio>();
+/** The exact numerator and denominator flexura computes with, per factor (the handed-out ones are copies). */
+const OWN_PARTS = new WeakMap<UnitFactor, readonly [Decimal, Decimal]>();
+
+/** The numerator and denominator of `unit` to compute with: flexura's own when it made `unit`. */
+export function exactPartsOf(unit: UnitFactor): readonly [Decimal, Decimal] {
+  return OWN_PARTS.get(unit) ?? [unit.numerator, unit.denominator];
+}
 
 function smallRatio(numerator: Decimal, denominator: Decimal): SmallRatio {
   const scale = Math.max(numerator.decimalPlaces(), denominator.decimalPlaces());
-  const num = numerator.times(10 ** scale).toNumber();
-  const den = denominator.times(10 ** scale).toNumber();
+  // receivers made with flexura's own constructor, whatever made the arguments
+  const num = new ExactDecimal(numerator).times(10 ** scale).toNumber();
+  const den = new ExactDecimal(denominator).times(10 ** scale).toNumber();
   return num < 2 ** 53 && den < 2 ** 53 && scale <= 22 ? { num, den } : { num: Infinity, den: Infinity };
 }
 
@@ -125,20 +136,26 @@ export function readUnit(text: string, path: IssuePath): FlexuraIssue[] | UnitFa
     return [issue("unit-syntax", path, message, { unit: text, at: 0 })];
   }
   const dimension: Dimension = Object.freeze({ length: acc.length, force: acc.force, angle: acc.angle });
-  const numerator = Object.freeze(acc.numerator);
-  const denominator = Object.freeze(acc.denominator);
-  const factor = Object.freeze(numerator.div(denominator));
+  const factor = acc.numerator.div(acc.denominator);
+  const scale = factor.toNumber();
+  const unit = printUnitExpression(parsed.expression);
+  // a factor a double cannot hold (or holds only as a subnormal, with lost digits) would give Infinity or 0
+  if (!(scale < Infinity && scale >= MIN_NORMAL)) {
+    const message = `The unit ${JSON.stringify(text)} is worth ${factor.toExponential(3)} ${describeDimension(dimension)} in SI base units, ${scale >= 1 ? "more" : "less"} than a JavaScript number can hold (about 2.2e-308 to 1.8e308); use a unit of smaller powers.`;
+    return [issue("unit-out-of-range", path, message, { unit: text })];
+  }
   const result: UnitFactor = Object.freeze({
     kind: "unit-factor",
-    unit: printUnitExpression(parsed.expression),
+    unit,
     dimension,
     kinds: kindsOfDimension(dimension),
-    numerator,
-    denominator,
-    factor,
-    scale: factor.toNumber(),
+    numerator: handOut(acc.numerator),
+    denominator: handOut(acc.denominator),
+    factor: handOut(factor),
+    scale,
   });
-  SMALL.set(result, smallRatio(numerator, denominator));
+  SMALL.set(result, smallRatio(acc.numerator, acc.denominator));
+  OWN_PARTS.set(result, [acc.numerator, acc.denominator]);
   return result;
 }
 
@@ -177,7 +194,8 @@ export function resolveUnit(unit: unknown, path: IssuePath): FlexuraIssue[] | Un
  * @param unit - The unit text, such as `"kip*ft"`, `"N/mm^2"` or `"in^4"`.
  * @param options - See {@link UnitFactorOptions}.
  * @returns The factor; `factor` and `scale` are the SI value of one `unit`.
- * @throws FlexuraError `unit-not-a-string`, `unit-empty`, `unit-syntax`, `unknown-unit` (one issue per unknown symbol, with suggestions).
+ * @throws FlexuraError `unit-not-a-string`, `unit-empty`, `unit-syntax`, `unknown-unit` (one issue per unknown symbol, with suggestions),
+ *   `unit-out-of-range` (a value in SI base units beyond what a double holds, such as `GPa^12*GPa^12*GPa^12`), `options-invalid`.
  * @example
  * ```ts
  * unitFactor("kip*ft").factor.toString(); // "1355.8179483314004" (N*m, exact)
@@ -186,7 +204,7 @@ export function resolveUnit(unit: unknown, path: IssuePath): FlexuraIssue[] | Un
  * ```
  */
 export function unitFactor(unit: string, options?: UnitFactorOptions): UnitFactor {
-  const read = resolveUnit(unit, options?.path ?? []);
+  const read = resolveUnit(unit, optionsPath(options));
   if (Array.isArray(read)) throw new FlexuraError(read);
   return read;
 }

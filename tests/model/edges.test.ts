@@ -219,3 +219,38 @@ describe("refuseNotFinite names the input behind a result that is not finite", (
     expect(at(["constructor"])).toBe("loads [result-not-finite]");
   });
 });
+
+describe("a cloned analysis carries only its own data", () => {
+  it("structuredClone of a small analysis holds no buffer larger than the diagram it belongs to", () => {
+    const a = analyzeModel(parseModel(base()));
+    const copy = structuredClone(a);
+    const sizes: number[] = [];
+    const visit = (v: unknown): void => {
+      if (ArrayBuffer.isView(v)) sizes.push(v.buffer.byteLength);
+      else if (Array.isArray(v)) v.forEach(visit);
+      else if (typeof v === "object" && v !== null) Object.values(v).forEach(visit);
+    };
+    visit(copy);
+    expect(sizes.length).toBeGreaterThan(0);
+    // Two pieces of a cubic at most: breaks and coefficients are a few dozen doubles, far below a shared 16 KiB block.
+    for (const bytes of sizes) expect(bytes).toBeLessThanOrEqual(256);
+    expect(copy.reactions).toEqual(a.reactions);
+  });
+});
+
+describe("a part's allowable that overflows the utilisation is reported at the part", () => {
+  it("a built-up part with a tiny bendingStress of its own: result-not-finite at section.parts[1].bendingStress", () => {
+    // An invented timber-and-steel flitch: two timber plies, a steel plate with its own (absurd) allowable.
+    const box = (z0: number, z1: number) => ({ type: "polygon", points: [{ y: 0, z: z0 }, { y: 0, z: z1 }, { y: 240, z: z1 }, { y: 240, z: z0 }] });
+    const file = {
+      length: 4.8,
+      material: { name: "timber", E: "11 GPa" },
+      section: { shape: "built-up", parts: [box(0, 45), { ...box(45, 55), material: { name: "steel", E: "200 GPa" }, bendingStress: 1e-320 }, box(55, 100)] },
+      supports: [{ at: 0, type: "pin" }, { at: 4.8, type: "roller" }],
+      loads: [{ type: "distributed", start: 2.2 }],
+      limits: { bendingStress: "12 MPa" },
+    };
+    const r = tryAnalyzeModel(parseModel(file));
+    expect(r.ok || r.error.issues.map((i) => `${formatPath(i.path)} [${i.code}]`)).toEqual(["section.parts[1].bendingStress [result-not-finite]"]);
+  });
+});
