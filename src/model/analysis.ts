@@ -131,14 +131,26 @@ export interface ModelShearStressExtreme {
   readonly y: number;
 }
 
+/** The peak shear stress in one solid part of a section of several materials, over the part's own heights. */
+export interface ModelPartShearStress extends ModelShearStressExtreme {
+  /** The part's index in `section.parts`. */
+  readonly part: number;
+}
+
 /** The largest tensile and compressive bending stress on the member. */
 export interface ModelStress {
   /** Largest tension (a value >= 0). */
   readonly tension: ModelStressExtreme;
   /** Largest compression (a value <= 0). */
   readonly compression: ModelStressExtreme;
-  /** Largest shear stress magnitude and where it acts; absent when the shear force is zero everywhere. */
+  /**
+   * Largest shear stress magnitude and where it acts; absent when the shear force is zero
+   * everywhere. For a section of several materials, the largest of the materials' own stresses
+   * n |V| Q* / (I* b*) (transformed section), not the transformed section's.
+   */
   readonly shear?: ModelShearStressExtreme;
+  /** For a section of several materials: each solid part's own peak shear stress, by part index. */
+  readonly shearByPart?: readonly ModelPartShearStress[];
 }
 
 /**
@@ -171,6 +183,8 @@ export interface ModelCheck {
   readonly fibre?: "top" | "bottom";
   /** Stress checks: the fibre or cut height above the centroid (negative below), in the section-length unit. */
   readonly y?: number;
+  /** Checks of one part of a section of several materials: the part's index in `section.parts`. */
+  readonly part?: number;
 }
 
 /** A caution about the model or its results that does not stop the analysis. */

@@ -110,6 +110,7 @@ export function reportSection(analysis: ModelAnalysis): string {
       ["largest compression", formatReportQuantity(st.compression.value, u.stress), where(st.compression.at, st.compression.y)],
     ];
     if (st.shear !== undefined) rows.push(["largest shear stress", formatReportQuantity(st.shear.value, u.stress), `x = ${formatReportQuantity(st.shear.at, u.length)}`]);
+    for (const p of st.shearByPart ?? []) rows.push([`largest shear stress, part ${p.part}`, formatReportQuantity(p.value, u.stress), where(p.at, p.y)]);
     out.push(indent(textTable(rows)));
   }
   return out.join("\n");

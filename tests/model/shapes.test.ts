@@ -1,6 +1,7 @@
 import { describe, expect, it } from "vitest";
 import { formatPath } from "../../src/errors/index.js";
 import { analyzeModel, modelToJson, parseModel, tryAnalyzeModel, tryParseModel, type ModelAnalysis } from "../../src/model/index.js";
+import { reportSection } from "../../src/report/index.js";
 
 /** |a - b| <= rel |b| */
 const within = (a: number, b: number, rel: number): void => {
@@ -195,6 +196,25 @@ describe("built-up sections", () => {
     const unchecked = si(flitch({ modularRatio: n }), { ...timber, limits: { bendingStress: 10 } });
     expect(unchecked.checks.map((c) => c.description.replace(/ against.*/, ""))).toEqual([0, 0, 2, 2].map((p, i) => `extreme-fibre bending stress (${i % 2 === 0 ? "tension" : "compression"}) in part ${p}`));
     expect(unchecked.warnings.map((w) => w.code)).toEqual(["part-bending-stress-not-checked"]);
+    // Shear, each material against its own allowable: by the transformed-section derivation (Gere and Goodno, Mechanics of
+    // Materials, Sec. 6.3, from memory) the cut at the neutral axis carries V Q* / (I* b*) = 1.5 V / (b* h) in the timber,
+    // b* = 100 + 10 n, and n times that in the plate; V = P / 2 = 5 kN beside the midspan load.
+    const tauTimber = (1.5 * 5e3) / ((100 + 10 * n) * 300);
+    const sheared = si(flitch({ material: { E: "200 GPa" }, shearStress: "100 MPa" }), { ...timber, limits: { shearStress: 1 } });
+    expect(sheared.checks.map((c) => [c.description, c.part])).toEqual([
+      ["peak shear stress in part 0 against 1 MPa", 0],
+      ["peak shear stress in part 1 against 100 MPa", 1],
+      ["peak shear stress in part 2 against 1 MPa", 2],
+    ]);
+    within(sheared.checks[0]!.demand, tauTimber, 1e-9);
+    within(sheared.checks[1]!.demand, n * tauTimber, 1e-9);
+    within(sheared.stress!.shear!.value, n * tauTimber, 1e-9);
+    expect(sheared.stress!.shearByPart!.map((p) => p.part)).toEqual([0, 1, 2]);
+    within(sheared.stress!.shearByPart![2]!.value, tauTimber, 1e-9);
+    const shearUnchecked = si(flitch({ material: { E: "200 GPa" } }), { ...timber, limits: { shearStress: 1 } });
+    expect(shearUnchecked.checks.map((c) => c.part)).toEqual([0, 2]);
+    expect(shearUnchecked.warnings.map((w) => w.code)).toEqual(["part-shear-stress-not-checked"]);
+    expect(reportSection(sheared)).toMatch(/largest shear stress, part 1\s+1\.61\d* MPa/);
   });
 });
 
