@@ -60,9 +60,13 @@ function deflectionCheck(limit: DeflectionLimit, d: SpanDeflection, index: numbe
  */
 export function checkMember(solution: CheckedSolution, sections: MemberSections, limits: MemberLimits): MemberCheck {
   const found = new IssueCollector();
-  const stretches = resolveSections(found, sections, solution.length, ["sections"]);
-  const given = checkLimits(found, limits, ["limits"]);
-  if ((given?.shearStress !== undefined || (given?.shearStressByPart ?? []).some((b) => b !== null)) && found.empty) {
+  // the limits first (they say whether shear is needed), their issues listed after the sections'
+  const limitIssues = new IssueCollector();
+  const given = checkLimits(limitIssues, limits, ["limits"]);
+  const needShear = given?.shearStress !== undefined || (given?.shearStressByPart ?? []).some((b) => b !== null);
+  const stretches = resolveSections(found, sections, solution.length, ["sections"], needShear);
+  found.addAll(limitIssues.issues);
+  if (needShear && found.empty) {
     stretches.forEach((s, i) => {
       if (s.unitShear === null) {
         const path = Array.isArray(sections) ? ["sections", i, "shear"] : ["sections", "shear"];

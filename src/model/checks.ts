@@ -15,6 +15,7 @@ import {
   type SpanDeflection,
 } from "../check/index.js";
 import { FlexuraError, isFlexuraError, type IssuePath } from "../errors/index.js";
+import { connectedPieces } from "../section/index.js";
 import type { ModelCheck, ModelScale, ModelStress, ModelStressExtreme, ModelWarning } from "./analysis.js";
 import type { Model, ModelDeflectionLimit } from "./model.js";
 import { isMultiMaterial, type SectionInSI } from "./model-section.js";
@@ -164,6 +165,13 @@ function withSection(model: Model, solution: BeamSolution, section: SectionInSI,
   };
   unchecked(multi?.unchecked ?? [], "bending stress", "bendingStress");
   unchecked(multiShear?.unchecked ?? [], "shear stress", "shearStress");
+  const pieces = section.geometry.parts.length > 1 ? connectedPieces(section.geometry) : [];
+  if (pieces.length > 1) {
+    warnings.push({
+      code: "section-not-connected",
+      message: `The section is in ${pieces.length} separate pieces (parts ${pieces.map((p) => `[${p.join(", ")}]`).join(", ")}): its bending properties assume they act together, joined by connectors the model does not describe, and no shear stress is given (a shear-stress limit cannot be checked). Make the parts meet along an edge.`,
+    });
+  }
   const member = memberSection(section.geometry, section.referenceModulus === undefined ? undefined : { referenceModulus: section.referenceModulus });
   const anyLimit =
     limits.bendingStress !== undefined || limits.shearStress !== undefined || limits.deflection !== undefined || [...(limits.bendingStressByPart ?? []), ...(limits.shearStressByPart ?? [])].some((b) => b !== null);
