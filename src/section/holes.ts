@@ -226,7 +226,7 @@ export function checkHoles(found: IssueCollector, p: HoleInput, tolerance: numbe
     const outside = boundaryOutside(p, i, tolerance) ?? gapInside(p, i, tolerance, step);
     if (outside) {
       const at = { y: outside[1] + ref.y, z: outside[0] + ref.z };
-      found.add("hole-outside-solid", ["parts", i], `The hole reaches outside the solid parts (at y = ${at.y}, z = ${at.z}); keep it inside them.`, { at });
+      found.add("hole-outside-solid", ["parts", i], `This hole reaches outside every solid part (for example at y = ${at.y}, z = ${at.z}); a hole must lie within the solid parts it is cut from.`, { at });
       continue;
     }
     for (let j = 0; j < i; j++) {
