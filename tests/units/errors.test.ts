@@ -391,7 +391,7 @@ describe("bad input gives typed errors", () => {
       ]
     `);
     // near spellings by edit distance with adjacent swaps, nearest first
-    expect(bad("12 kpi")[0]?.["suggestions"]).toEqual(["kip", "kPa", "ksi"]);
+    expect((bad("12 kpi") as { suggestions?: unknown }[])[0]?.suggestions).toEqual(["kip", "kPa", "ksi"]);
     expect(bad("12 kipf")).toMatchInlineSnapshot(`
       [
         {
