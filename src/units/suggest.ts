@@ -21,7 +21,8 @@ function distance(a: string, b: string): number {
 
 /**
  * Up to three known units close to an unknown spelling: a different letter case (`KN` -> `kN`),
- * two symbols run together (`kNm` -> `kN*m`), or a near spelling (`kpi` -> `kip`).
+ * two symbols run together (`kNm` -> `kN*m`), or the nearest spellings by edit distance with adjacent
+ * swaps, at most 1 edit for 3 letters or fewer and 2 above (`kpi` -> `kip`, `kPa`, `ksi`).
  */
 export function suggestUnits(spelling: string): readonly string[] {
   const out: string[] = [];
@@ -45,6 +46,7 @@ export function suggestUnits(spelling: string): readonly string[] {
     .map((s) => ({ s, d: distance(lower, s.toLowerCase()) }))
     .filter((x) => x.d <= limit)
     .sort((x, y) => x.d - y.d);
-  for (const { s } of near) add(lookupUnit(s)?.symbol ?? s);
+  // the nearest only: "kipz" is one edit from kip and two from kPa
+  for (const { s, d } of near) if (d === near[0]?.d) add(lookupUnit(s)?.symbol ?? s);
   return out.slice(0, 3);
 }

@@ -38,7 +38,7 @@ describe("channel sections against tabulated rolled channels", () => {
     const a = us({ shape: "channel", depth: d, flangeWidth: bf, flangeThickness: tf, webThickness: tw });
     within(a.section!.area, A, 0.01);
     within(a.section!.secondMomentZ, Ix, 0.01);
-    within(a.section!.sectionModulusTop, Sx, 0.01);
+    within(a.section!.sectionModulus.top, Sx, 0.01);
     expect(a.section!.centroid.y).toBeCloseTo(0, 12); // symmetric about the bending axis
     expect(a.warnings).toEqual([]);
   });
@@ -50,9 +50,9 @@ describe("angle sections against tabulated rolled angles", () => {
     // AISC Steel Construction Manual 15th ed., Table 1-7 (angles), from memory: A = 4.75 in^2, y = 1.99 in,
     // x = 0.987 in, I_x = 17.4 in^4, S_x = 4.33 in^3, I_y = 6.27 in^4 (toe and root radii not modelled).
     within(a.section!.area, 4.75, 0.002);
-    within(a.section!.yBottom, 1.99, 0.005);
+    within(a.section!.extremes.bottom * -1, 1.99, 0.005);
     within(a.section!.secondMomentZ, 17.4, 0.005);
-    within(a.section!.sectionModulusTop, 4.33, 0.005);
+    within(a.section!.sectionModulus.top, 4.33, 0.005);
     within(a.section!.secondMomentY, 6.27, 0.005);
     // The centroid lies x = 0.987 in from the back of the vertical leg; the model's angle has its bounding box centred.
     within(a.section!.centroid.z + 2, 0.987, 0.005);
@@ -63,7 +63,7 @@ describe("angle sections against tabulated rolled angles", () => {
     const a = us({ shape: "angle", verticalLeg: 4, thickness: 0.5 });
     // AISC Steel Construction Manual 15th ed., Table 1-7, from memory: A = 3.75 in^2, y = 1.18 in, I_x = 5.52 in^4.
     within(a.section!.area, 3.75, 0.002);
-    within(a.section!.yBottom, 1.18, 0.005);
+    within(a.section!.extremes.bottom * -1, 1.18, 0.005);
     within(a.section!.secondMomentZ, 5.52, 0.01);
     expect(a.section!.secondMomentY).toBeCloseTo(a.section!.secondMomentZ, 10); // equal legs
   });
@@ -78,7 +78,7 @@ describe("rectangular hollow sections", () => {
     const I = (B * D ** 3 - b * d ** 3) / 12;
     within(a.section!.area, B * D - b * d, 1e-12);
     within(a.section!.secondMomentZ, I, 1e-12);
-    within(a.section!.sectionModulusTop, I / (D / 2), 1e-12);
+    within(a.section!.sectionModulus.top, I / (D / 2), 1e-12);
     // tau = V Q / (I b) with Q of the half section above the neutral axis (common practice).
     const Q = (B * D ** 2) / 8 - (b * d ** 2) / 8;
     within(a.stress!.shear!.value, (5e3 * Q) / (I * 2 * t), 1e-9);
@@ -94,7 +94,7 @@ describe("rectangular hollow sections", () => {
     const a = us({ shape: "rectangular-hollow", width: B, depth: D, wallThickness: t, cornerRadius: 2 * t });
     within(a.section!.area, A, 0.005);
     within(a.section!.secondMomentZ, Ix, 0.005);
-    within(a.section!.sectionModulusTop, Sx, 0.005);
+    within(a.section!.sectionModulus.top, Sx, 0.005);
     within(a.section!.secondMomentY, Iy, 0.005);
   });
 });
@@ -111,7 +111,7 @@ describe("plate girders", () => {
     const area = parts.reduce((s, p) => s + p.A, 0);
     const yc = parts.reduce((s, p) => s + p.A * p.y, 0) / area;
     within(a.section!.area, area, 1e-12);
-    within(a.section!.yBottom, yc, 1e-12);
+    within(a.section!.extremes.bottom * -1, yc, 1e-12);
     within(a.section!.secondMomentZ, parts.reduce((s, p) => s + p.I + p.A * (p.y - yc) ** 2, 0), 1e-12);
   });
 
