@@ -15,6 +15,11 @@ export const EXIT = {
   invalidModel: 4,
   /** An unexpected failure inside flexura: a bug to report. */
   internal: 5,
+  /**
+   * `check` only: the model was analysed but gives no limits, so nothing was checked and no pass
+   * is claimed (a verdict never passes by default).
+   */
+  notChecked: 6,
 } as const;
 
 /** One of the exit codes in {@link EXIT}. */

@@ -19,6 +19,7 @@ Exit codes:
   3  a file could not be read or written
   4  the model is not valid JSON, not a valid model, or cannot be solved
   5  unexpected failure inside flexura (please report it)
+  6  check: a model gives no limits, so nothing was checked (no pass is claimed)
 
 flexura performs an elastic, first-order analysis. You are responsible for the loads,
 for code compliance and for review by a licensed engineer. Local codes govern.
@@ -48,8 +49,8 @@ Options:
                { file, ok, pass, exitCode, checks, governing, utilisation, failed, problems }
   -h, --help   show this help
 
-Exit codes: 0 every check of every file passed (also when a model gives no limits),
-1 at least one check failed, 2 usage, 3 file, 4 invalid model, 5 internal.
+Exit codes: 0 every check of every file passed, 1 at least one check failed, 2 usage,
+3 file, 4 invalid model, 5 internal, 6 a model gives no limits (nothing checked, no pass).
 `,
   schema: `Usage: flexura schema
 

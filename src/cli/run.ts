@@ -67,7 +67,10 @@ function dispatch(argv: readonly string[], io: CliIo): ExitCode {
 
 /** Orders exit codes by gravity, so that `check` over many files returns the worst. */
 function rank(code: ExitCode): number {
-  return code === EXIT.checkFailed ? 1 : code === EXIT.ok ? 0 : 2 + code;
+  if (code === EXIT.ok) return 0;
+  if (code === EXIT.notChecked) return 1;
+  if (code === EXIT.checkFailed) return 2;
+  return 3 + code;
 }
 
 /** Says what failed: plain lines on stderr, or one JSON object on stdout with `--json`; returns the exit code. */
@@ -132,9 +135,9 @@ function checkCommand(file: string, json: boolean, io: CliIo): ExitCode {
     return loaded.failure.exitCode;
   }
   const analysis = loaded.analysis;
-  const verdict = analysis.checks.every((c) => c.pass) ? EXIT.ok : EXIT.checkFailed;
-  io.stdout(json ? `${JSON.stringify(compactVerdict(file, analysis))}\n` : checkVerdict(file, analysis));
-  return verdict;
+  const verdict = compactVerdict(file, analysis);
+  io.stdout(json ? `${JSON.stringify(verdict)}\n` : checkVerdict(file, analysis));
+  return verdict.exitCode;
 }
 
 /**
@@ -146,7 +149,7 @@ export interface CompactVerdict {
   readonly file: string;
   /** The model was read and analysed (no problems). */
   readonly ok: boolean;
-  /** Every check passed (false when the model could not be analysed, or when nothing was checked is `true` with `checks: 0`). */
+  /** At least one check ran and every check passed (false when the model could not be analysed, and false with `checks: 0` when it gives no limits). */
   readonly pass: boolean;
   /** The exit code this file alone gives. */
   readonly exitCode: ExitCode;
@@ -166,12 +169,12 @@ export interface CompactVerdict {
 export function compactVerdict(file: string, analysis: ModelAnalysis): CompactVerdict {
   const checks = analysis.checks;
   const governing = governingCheck(analysis);
-  const pass = checks.every((c) => c.pass);
+  const pass = checks.length > 0 && checks.every((c) => c.pass);
   return {
     file,
     ok: true,
     pass,
-    exitCode: pass ? EXIT.ok : EXIT.checkFailed,
+    exitCode: checks.length === 0 ? EXIT.notChecked : pass ? EXIT.ok : EXIT.checkFailed,
     checks: checks.length,
     governing: governing?.description ?? null,
     utilisation: governing?.utilisation ?? null,
@@ -192,7 +195,7 @@ function governingCheck(analysis: ModelAnalysis): ModelAnalysis["checks"][number
 
 /**
  * The verdict `flexura check` prints for one model: PASS or FAIL, how many checks, the governing
- * utilisation, and one line per failing check.
+ * utilisation, and one line per failing check; NOT CHECKED when the model gives no limits.
  *
  * @example
  * ```ts
@@ -202,7 +205,7 @@ function governingCheck(analysis: ModelAnalysis): ModelAnalysis["checks"][number
 export function checkVerdict(file: string, analysis: ModelAnalysis): string {
   const checks = analysis.checks;
   const name = displayName(file);
-  if (checks.length === 0) return `PASS ${name}: no limits given, nothing to check\n`;
+  if (checks.length === 0) return `NOT CHECKED ${name}: the model gives no limits, so nothing was checked; add "limits" to check the member\n`;
   const failed = checks.filter((c) => !c.pass);
   const governing = governingCheck(analysis);
   const gov = governing === undefined ? "" : `, governing utilisation ${formatReportNumber(governing.utilisation, 3)} (${governing.description})`;

@@ -1,12 +1,22 @@
 import { sheetError, type SheetValue } from "./cells.js";
 import { sheetDeflection, sheetModelResult, sheetMoment, sheetPeaks, sheetReactions, sheetShear, sheetSlope, sheetStations } from "./functions.js";
 
+/** One argument of a spreadsheet function: its name, whether it takes a range, and what goes in it. */
+export interface SheetParameter {
+  /** The argument's name, as the function's help shows it. */
+  readonly name: string;
+  /** `true` when the argument is a range of rows (supports, loads, a table); `false` for one cell. */
+  readonly range: boolean;
+  /** What to put in it, with its unit. */
+  readonly summary: string;
+}
+
 /** One spreadsheet function: its name as a sheet shows it, its arguments in order, and what it returns. */
 export interface SheetFunction {
   /** The name in the sheet, upper case, in the `FLEXURA.` namespace. */
   readonly name: string;
-  /** Argument names in order; those after `required` may be left out. */
-  readonly parameters: readonly string[];
+  /** Arguments in order; those after `required` may be left out. */
+  readonly parameters: readonly SheetParameter[];
   /** How many arguments must be given. */
   readonly required: number;
   /** `"table"` when it spills rows of cells, `"value"` for one cell. */
@@ -17,17 +27,31 @@ export interface SheetFunction {
   readonly call: (...args: unknown[]) => SheetValue;
 }
 
-const MEMBER = ["length", "E", "I", "supports", "loads", "units"] as const;
+const cell = (name: string, summary: string): SheetParameter => Object.freeze({ name, range: false, summary });
+const range = (name: string, summary: string): SheetParameter => Object.freeze({ name, range: true, summary });
 
-const entry = (name: string, parameters: readonly string[], required: number, returns: "table" | "value", summary: string, call: (...args: never[]) => SheetValue): SheetFunction =>
+const MEMBER: readonly SheetParameter[] = [
+  cell("length", "Member length (length unit, or text with a unit such as \"6 m\")."),
+  cell("E", "Modulus of elasticity (modulus unit, or text such as \"200 GPa\")."),
+  cell("I", "Second moment of area (section unit^4, or text such as \"80e6 mm^4\")."),
+  range("supports", "Rows of position | kind (pin, roller, fixed, guided, spring) | spring stiffness or settlement."),
+  range("loads", "Rows of kind (point, moment, distributed) | position | end position | value | end value | case; forces down positive."),
+  cell("units", "Optional unit set: siNewtonMetre, siKilonewtonMetre, siNewtonMillimetre, usKipFoot, usKipInch; blank: m, kN, mm, MPa."),
+];
+const X = cell("x", "Position from the left end (length unit).");
+
+const entry = (name: string, parameters: readonly SheetParameter[], required: number, returns: "table" | "value", summary: string, call: (...args: never[]) => SheetValue): SheetFunction =>
   Object.freeze({ name, parameters: Object.freeze([...parameters]), required, returns, summary, call: guarded(name, parameters, required, call as (...args: unknown[]) => SheetValue) });
 
 /** Checks the argument count and turns anything thrown into an error value: a sheet function never throws. */
-function guarded(name: string, parameters: readonly string[], required: number, call: (...args: unknown[]) => SheetValue): (...args: unknown[]) => SheetValue {
+function guarded(name: string, parameters: readonly SheetParameter[], required: number, call: (...args: unknown[]) => SheetValue): (...args: unknown[]) => SheetValue {
   return (...args: unknown[]): SheetValue => {
-    if (args.length < required || args.length > parameters.length) {
+    // A host that passes every declared argument passes the ones left out as undefined: they do not count.
+    let given = args.length;
+    while (given > required && args[given - 1] === undefined) given -= 1;
+    if (given < required || given > parameters.length) {
       const wanted = required === parameters.length ? `${required}` : `${required} to ${parameters.length}`;
-      return sheetError("sheet-argument-count", `${name} takes ${wanted} arguments (${parameters.join(", ")}); got ${args.length}.`);
+      return sheetError("sheet-argument-count", `${name} takes ${wanted} arguments (${parameters.map((p) => p.name).join(", ")}); got ${given}.`);
     }
     try {
       return call(...args);
@@ -40,11 +64,25 @@ function guarded(name: string, parameters: readonly string[], required: number, 
 /** Every spreadsheet function of flexura, in the order docs/sheet.md lists them. */
 export const sheetFunctions: readonly SheetFunction[] = Object.freeze([
   entry("FLEXURA.REACTIONS", MEMBER, 5, "table", "Reactions: support, position, force (up positive), moment (counterclockwise positive).", sheetReactions),
-  entry("FLEXURA.SHEAR", ["x", ...MEMBER], 6, "value", "Shear force at x (right-hand limit at a point load).", sheetShear),
-  entry("FLEXURA.MOMENT", ["x", ...MEMBER], 6, "value", "Bending moment at x, positive sagging.", sheetMoment),
-  entry("FLEXURA.SLOPE", ["x", ...MEMBER], 6, "value", "Slope at x, positive counterclockwise.", sheetSlope),
-  entry("FLEXURA.DEFLECTION", ["x", ...MEMBER], 6, "value", "Deflection at x, positive upward.", sheetDeflection),
+  entry("FLEXURA.SHEAR", [X, ...MEMBER], 6, "value", "Shear force at x (right-hand limit at a point load).", sheetShear),
+  entry("FLEXURA.MOMENT", [X, ...MEMBER], 6, "value", "Bending moment at x, positive sagging.", sheetMoment),
+  entry("FLEXURA.SLOPE", [X, ...MEMBER], 6, "value", "Slope at x, positive counterclockwise.", sheetSlope),
+  entry("FLEXURA.DEFLECTION", [X, ...MEMBER], 6, "value", "Deflection at x, positive upward.", sheetDeflection),
   entry("FLEXURA.PEAKS", MEMBER, 5, "table", "Largest and smallest shear, moment, slope and deflection, with where they occur.", sheetPeaks),
-  entry("FLEXURA.STATIONS", ["intervals", ...MEMBER], 6, "table", "x, shear, moment and deflection at evenly spaced stations, for a chart.", sheetStations),
-  entry("FLEXURA.MODEL", ["model", "path"], 2, "value", "Any result of a model given as JSON text, by a path such as moment.max.value.", sheetModelResult),
+  entry("FLEXURA.STATIONS", [cell("intervals", "Number of equal intervals, 1 to 10,000 (a station at each end of each)."), ...MEMBER], 6, "table", "x, shear, moment and deflection at evenly spaced stations, for a chart.", sheetStations),
+  entry("FLEXURA.MODEL", [cell("model", "A model file's JSON text (docs/model-format.md)."), cell("path", "A result path such as moment.max.value or reactions[0].force.")], 2, "value", "Any result of a model given as JSON text, by a path such as moment.max.value.", sheetModelResult),
 ]);
+
+const byName: ReadonlyMap<string, SheetFunction> = new Map(sheetFunctions.map((f) => [f.name, f]));
+
+/**
+ * Calls a spreadsheet function by its name as a sheet shows it (`"FLEXURA.MOMENT"`, upper or lower case) with
+ * plain cell values; an unknown name is an error value, and so is anything the function would have thrown.
+ *
+ * @example `callSheetFunction("FLEXURA.MOMENT", [3, 6, "200 GPa", "80e6 mm^4", [[0, "pin"], [6, "roller"]], [["distributed", null, null, 12]]])` is 54 (kN*m).
+ */
+export function callSheetFunction(name: string, args: readonly unknown[]): SheetValue {
+  const f = typeof name === "string" ? byName.get(name.trim().toUpperCase()) : undefined;
+  if (f === undefined) return sheetError("sheet-unknown-function", `"${String(name)}" is not a flexura sheet function; use one of ${sheetFunctions.map((g) => g.name).join(", ")}.`);
+  return Array.isArray(args) ? f.call(...(args as readonly unknown[])) : f.call();
+}

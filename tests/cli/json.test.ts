@@ -98,6 +98,29 @@ describe("check --json: one compact line per file, valid or not", () => {
   });
 });
 
+describe("check on a model with no limits: nothing checked, no pass claimed", () => {
+  // A verdict must never pass by default (common practice for any checking tool: an empty check list is not a pass).
+  const noLimits = (): string => {
+    const m = JSON.parse(readFileSync(fixture("passes-check.json"), "utf8")) as Record<string, unknown>;
+    delete m.limits;
+    return JSON.stringify(m);
+  };
+  test("text: NOT CHECKED and exit 6", () => {
+    const io = memoryIo({}, noLimits());
+    expect(runCli(["check", "-"], io)).toBe(EXIT.notChecked);
+    expect(io.out.join("")).toMatch(/^NOT CHECKED standard input: the model gives no limits/);
+  });
+  test("--json: pass false with no checks, exit 6; a failing file elsewhere still outranks it", () => {
+    const io = memoryIo({}, noLimits());
+    expect(runCli(["check", "-", "--json"], io)).toBe(EXIT.notChecked);
+    expect(lines(io.out)).toEqual([{ file: "-", ok: true, pass: false, exitCode: 6, checks: 0, governing: null, utilisation: null, failed: [], problems: [] }]);
+    const both = memoryIo({}, noLimits());
+    expect(runCli(["check", "-", fixture("fails-check.json"), "--json"], both)).toBe(EXIT.checkFailed);
+    const passing = memoryIo({}, noLimits());
+    expect(runCli(["check", fixture("passes-check.json"), "-"], passing)).toBe(EXIT.notChecked);
+  });
+});
+
 describe("standard input and bad files", () => {
   const model = readFileSync(fixture("passes-check.json"), "utf8");
   test("`-` reads the model from standard input", () => {
