@@ -12,6 +12,7 @@ export const entries = {
   check: "src/check/index.ts",
   sheet: "src/sheet/index.ts",
   design: "src/design/index.ts",
+  combine: "src/combine/index.ts",
 } as const;
 
 /**
