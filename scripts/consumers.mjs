@@ -14,12 +14,14 @@ import { rectangle } from "flexura/section";
 import { checkMember } from "flexura/check";
 import { parseQuantity, type Quantity } from "flexura/units";
 import { sheetFunctions, type SheetValue } from "flexura/sheet";
+import { presetCombinations, type Combination } from "flexura/combine";
 const s: BeamSolution = solveBeam({ length: 4, stiffness: 1, supports: [{ kind: "pin", at: 0 }, { kind: "roller", at: 4 }], loads: [{ kind: "point", at: 2, value: 1 }] });
 const m: number = evaluatePiecewise(s.moment, 2);
 const a: ModelAnalysis | undefined = undefined as ModelAnalysis | undefined;
 const q: Quantity = parseQuantity("1 kN", "force");
 const sv: SheetValue | undefined = sheetFunctions[0]?.call();
-export const used = [m, a, q, sv, isFlexuraError, iSection, sectionProperties, parseModel, analyzeModel, textReport, extremeBendingStresses, rectangle, checkMember];
+const cb: readonly Combination[] = presetCombinations("asce7-16-strength", [{ name: "D", category: "dead" }]).combinations;
+export const used = [m, a, q, sv, cb, isFlexuraError, iSection, sectionProperties, parseModel, analyzeModel, textReport, extremeBendingStresses, rectangle, checkMember];
 `;
 
 /** Each row: a name, the compiler options, the source file's extension, and the package type around it. */

@@ -1,0 +1,13 @@
+export type { CaseCategory, LoadCase, CombinationPurpose, Combination } from "./types.js";
+export { CASE_CATEGORIES } from "./types.js";
+export type { PresetTerm, PresetRow } from "./asce7.js";
+export { ASCE7_16_STRENGTH, ASCE7_16_ALLOWABLE_STRESS } from "./asce7.js";
+export type { CombinationFactors, ImposedCategory, SnowSite, PsiTable, PartialFactors } from "./en1990.js";
+export { EN1990_PSI, EN1990_GAMMA } from "./en1990.js";
+export type { PresetName, PresetOptions, PresetCombinations } from "./preset.js";
+export { PRESET_NAMES, presetCombinations, tryPresetCombinations } from "./preset.js";
+export { combinationName, formatCombinations } from "./print.js";
+export type { SolveCasesOptions, DiagramCoefficients, CasePart, CombineWarning, CaseSolutions, DiagramName } from "./case-solutions.js";
+export { solveCases, trySolveCases } from "./case-solutions.js";
+export type { SpanPattern, CombinedResult } from "./superpose.js";
+export { combineCases } from "./superpose.js";
