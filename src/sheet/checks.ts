@@ -29,7 +29,7 @@ export function limitsJson(limits: unknown): ModelJson | SheetError {
 }
 
 /** Warnings that mean a limit given was not checked: a result without them would claim more than was checked. */
-const UNCHECKED = new Set(["stress-limit-without-section", "part-bending-stress-not-checked"]);
+const UNCHECKED = new Set(["stress-limit-without-section", "part-bending-stress-not-checked", "part-shear-stress-not-checked", "section-not-connected"]);
 
 /** The member with its section (blank shape: none) and limits, analysed; an error when a limit could not be checked. */
 function checked(limits: unknown, shape: unknown, dimensions: unknown, member: readonly unknown[]): ModelAnalysis | SheetError {

@@ -75,17 +75,17 @@ const PROPERTIES: readonly { name: string; unit: keyof ModelAnalysis["units"]; v
   { name: "centroid.z", unit: "sectionLength", value: (s) => s.centroid.z },
   { name: "secondMomentZ", unit: "secondMoment", value: (s) => s.secondMomentZ },
   { name: "secondMomentY", unit: "secondMoment", value: (s) => s.secondMomentY },
-  { name: "productMomentYZ", unit: "secondMoment", value: (s) => s.productMomentYZ },
-  { name: "sectionModulusTop", unit: "sectionModulus", value: (s) => s.sectionModulusTop },
-  { name: "sectionModulusBottom", unit: "sectionModulus", value: (s) => s.sectionModulusBottom },
-  { name: "yTop", unit: "sectionLength", value: (s) => s.yTop },
-  { name: "yBottom", unit: "sectionLength", value: (s) => s.yBottom },
+  { name: "productMoment", unit: "secondMoment", value: (s) => s.productMoment },
+  { name: "sectionModulus.top", unit: "sectionModulus", value: (s) => s.sectionModulus.top },
+  { name: "sectionModulus.bottom", unit: "sectionModulus", value: (s) => s.sectionModulus.bottom },
+  { name: "extremes.top", unit: "sectionLength", value: (s) => s.extremes.top },
+  { name: "extremes.bottom", unit: "sectionLength", value: (s) => s.extremes.bottom },
 ];
 
 /**
  * A section's properties as a two-column table, `property (unit) | value`, with a header row: area, centroid,
  * second moments I_z (bending axis, horizontal) and I_y, product moment, section moduli to the top and bottom
- * fibres, and the distances from the centroid to them, in the unit set's section units.
+ * fibres, and the heights of those fibres above the centroid (`extremes.bottom` is negative), in the unit set's section units.
  *
  * @example `=FLEXURA.SECTION("rectangle", A2:B3)` with `width | 100` and `depth | 200` gives secondMomentZ (mm^4) 66,666,667 (b h^3 / 12).
  */
@@ -97,7 +97,7 @@ export function sheetSection(shape: unknown, dimensions: unknown, units?: unknow
 }
 
 /**
- * One property of a section by name (`area`, `secondMomentZ`, `sectionModulusTop`, `centroid.y`, ...; any case;
+ * One property of a section by name (`area`, `secondMomentZ`, `sectionModulus.top`, `centroid.y`, ...; any case;
  * a table label such as `area (mm^2)` also works), in the unit set's section units.
  *
  * @example `=FLEXURA.SECTIONPROPERTY("secondMomentZ", "rectangle", A2:B3)`
@@ -140,7 +140,7 @@ export function sheetBendingStress(moment: unknown, y: unknown, shape: unknown, 
   if (isSheetError(at)) return at;
   const s = a.section!;
   const k = a.scale.sectionLength;
-  const r = attempt(() => bendingStress(M, at, { secondMomentZ: s.secondMomentZ * a.scale.secondMoment, extremes: { top: s.yTop * k, bottom: -s.yBottom * k } }));
+  const r = attempt(() => bendingStress(M, at, { secondMomentZ: s.secondMomentZ * a.scale.secondMoment, extremes: { top: s.extremes.top * k, bottom: s.extremes.bottom * k } }));
   return r.ok ? r.value / a.scale.stress : stressError(r.error, a);
 }
 
@@ -166,7 +166,7 @@ function stressError(error: unknown, a: ModelAnalysis): SheetError {
   const e = cellMessage(error);
   if (e.code === "fibre-outside-section") {
     const s = a.section!;
-    return sheetError(e.code, `y: the fibre is outside the section, which runs from ${s.yBottom} ${a.units.sectionLength} below the centroid to ${s.yTop} ${a.units.sectionLength} above it.`);
+    return sheetError(e.code, `y: the fibre is outside the section, which runs from ${-s.extremes.bottom} ${a.units.sectionLength} below the centroid to ${s.extremes.top} ${a.units.sectionLength} above it.`);
   }
   return e;
 }

@@ -31,9 +31,9 @@ describe("FLEXURA.SECTION and FLEXURA.SECTIONPROPERTY", () => {
     expect(p.get("area")).toBeCloseTo(100 * 200, 8);
     expect(p.get("secondMomentZ")).toBeCloseTo((100 * 200 ** 3) / 12, 4);
     expect(p.get("secondMomentY")).toBeCloseTo((200 * 100 ** 3) / 12, 4);
-    expect(p.get("sectionModulusTop")).toBeCloseTo((100 * 200 ** 2) / 6, 5);
-    expect(p.get("yTop")).toBeCloseTo(100, 10);
-    expect(p.get("yBottom")).toBeCloseTo(100, 10);
+    expect(p.get("sectionModulus.top")).toBeCloseTo((100 * 200 ** 2) / 6, 5);
+    expect(p.get("extremes.top")).toBeCloseTo(100, 10);
+    expect(p.get("extremes.bottom")).toBeCloseTo(-100, 10);
   });
   test("sheetSection(pipe, i-section, plate-girder) gives the closed forms", () => {
     // Pipe: I = pi (D^4 - d^4) / 64.
