@@ -1,4 +1,4 @@
-import { polynomialRootsIn } from "../math/index.js";
+import { polynomialRootsIn } from "../math/polynomial.js";
 import { taylorShift } from "./common-breaks.js";
 
 /** Binomial coefficients up to degree 8, row-major: BINOMIAL[n * 9 + k] = C(n, k). */
@@ -43,13 +43,15 @@ export interface EnvelopeBuilder {
 }
 
 const roots: number[] = [];
+const live: number[] = [];
+const shifted = new Float64Array(9);
 const rest = new Float64Array(9);
 const restBern = new Float64Array(9);
 
 /**
  * Appends to `env` the upper envelope (sign = 1) or lower envelope (sign = -1) on one piece
- * `[x0, x0 + h]` of K polynomials of degree d: `c[k * stride + piece * (d + 1) ..]`, with their
- * Bernstein coefficients in `bern[k * (d + 1) ..]`. `tol` is the rounding scale of the values:
+ * `[x0, x0 + h]` of K polynomials of degree d: `c[k * stride + offset ..]` in powers of `x - x0`,
+ * with their Bernstein coefficients in `bern[k * (d + 1) ..]`; `ids[k]` names polynomial k in `env.governing`. `tol` is the rounding scale of the values:
  * functions within it of the envelope count as equal. Crossings are roots of the differences.
  */
 export function envelopePiece(
@@ -65,6 +67,7 @@ export function envelopePiece(
   tol: number,
   env: EnvelopeBuilder,
   diff: Float64Array,
+  ids: ArrayLike<number>,
 ): void {
   const n = d + 1;
   // a function whose largest Bernstein coefficient is below the best smallest one never governs
@@ -74,19 +77,37 @@ export function envelopePiece(
     for (let j = 0; j < n; j++) lo = Math.min(lo, sign * (bern[k * n + j] as number));
     floor = Math.max(floor, lo);
   }
-  const live: number[] = [];
+  // champions: the best lower bound, the best start and the best end; a function that none of
+  // them leaves below on the whole piece (Bernstein coefficients of the difference) never governs
+  let byFloor = 0;
+  let byStart = 0;
+  let byEnd = 0;
+  for (let k = 0; k < K; k++) {
+    let lo = Infinity;
+    for (let j = 0; j < n; j++) lo = Math.min(lo, sign * (bern[k * n + j] as number));
+    if (lo === floor) byFloor = k;
+    if (sign * (bern[k * n] as number) > sign * (bern[byStart * n] as number)) byStart = k;
+    if (sign * (bern[k * n + d] as number) > sign * (bern[byEnd * n + d] as number)) byEnd = k;
+  }
+  live.length = 0;
   for (let k = 0; k < K; k++) {
     let hi = -Infinity;
     for (let j = 0; j < n; j++) hi = Math.max(hi, sign * (bern[k * n + j] as number));
-    if (hi >= floor - tol) live.push(k);
+    if (hi < floor - tol) continue;
+    // the champions themselves stay (two equal ones must not remove each other)
+    const champion = k === byFloor || k === byStart || k === byEnd;
+    if (!champion && (below(bern, k, byFloor, n, sign, tol) || below(bern, k, byStart, n, sign, tol) || below(bern, k, byEnd, n, sign, tol))) continue;
+    live.push(k);
   }
   // the governing function at the start: the largest value, ties broken by the derivatives
   let g = live[0] as number;
   for (let i = 1; i < live.length; i++) {
     const k = live[i] as number;
+    let hp = 1;
     for (let j = 0; j < n; j++) {
-      const a = sign * (c[k * stride + offset + j] as number) * h ** j;
-      const b = sign * (c[g * stride + offset + j] as number) * h ** j;
+      const a = sign * (c[k * stride + offset + j] as number) * hp;
+      const b = sign * (c[g * stride + offset + j] as number) * hp;
+      hp *= h;
       if (a > b + tol) {
         g = k;
         break;
@@ -139,23 +160,25 @@ export function envelopePiece(
     }
     if (next < 0) break;
     if (best - start > minStep) {
-      push(c, g, g * stride + offset, d, x0, start, env);
+      push(c, ids[g] as number, g * stride + offset, d, x0, start, env);
       start = best;
     }
     g = next;
     t = best;
   }
-  push(c, g, g * stride + offset, d, x0, start, env);
+  push(c, ids[g] as number, g * stride + offset, d, x0, start, env);
+}
+
+/** True when function k lies at or below function m on the whole piece (by the Bernstein coefficients of k - m). */
+function below(bern: Float64Array, k: number, m: number, n: number, sign: number, tol: number): boolean {
+  for (let j = 0; j < n; j++) if (sign * ((bern[k * n + j] as number) - (bern[m * n + j] as number)) > tol) return false;
+  return true;
 }
 
 function push(c: Float64Array, k: number, o: number, d: number, x0: number, t: number, env: EnvelopeBuilder): void {
   env.breaks.push(t === 0 ? x0 : x0 + t);
-  const base = env.coefficients.length;
-  for (let j = 0; j <= d; j++) env.coefficients.push(c[o + j] as number);
-  if (t !== 0) {
-    const tmp = Float64Array.from(env.coefficients.slice(base));
-    taylorShift(tmp, 0, d, t);
-    for (let j = 0; j <= d; j++) env.coefficients[base + j] = tmp[j] as number;
-  }
+  for (let j = 0; j <= d; j++) shifted[j] = c[o + j] as number;
+  if (t !== 0) taylorShift(shifted, 0, d, t);
+  for (let j = 0; j <= d; j++) env.coefficients.push(shifted[j] as number);
   env.governing.push(k);
 }

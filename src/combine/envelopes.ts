@@ -1,6 +1,6 @@
 import { attempt, describeValue, IssueCollector, type Result } from "../errors/index.js";
 import type { CaseSolutions, DiagramName } from "./case-solutions.js";
-import { envelopeOfDiagram, type DiagramEnvelope } from "./envelope.js";
+import { envelopeWithGroups, patternGroups, type DiagramEnvelope } from "./envelope.js";
 import { arrangementsOf, type LoadArrangement, type PatternOptions } from "./patterns.js";
 import type { Combination } from "./types.js";
 
@@ -77,7 +77,8 @@ export function envelopes(solved: CaseSolutions, combinations: readonly Combinat
   found.throwIfAny();
   const arrangements = arrangementsOf(solved, combinations, options?.pattern);
   const out: { -readonly [K in keyof Envelopes]: Envelopes[K] } = { arrangements, reactions: reactionEnvelopes(solved, arrangements) };
-  for (const d of new Set<DiagramName>(diagrams)) out[d] = envelopeOfDiagram(solved, d, arrangements);
+  const groups = patternGroups(solved, arrangements);
+  for (const d of new Set<DiagramName>(diagrams)) out[d] = envelopeWithGroups(solved, d, arrangements, groups);
   return Object.freeze(out);
 }
 

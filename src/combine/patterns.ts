@@ -32,6 +32,10 @@ export interface LoadArrangement {
   readonly description: string;
   /** The name a user reads: the combination's, then the pattern's (`"1.2D + 1.6L, L on spans 1 and 3"`). */
   readonly name: string;
+  /** The combination's factors by case. */
+  readonly factors: Readonly<Record<string, number>>;
+  /** True when every patterned case of the combination was searched over all subsets of its spans (not the standard patterns). */
+  readonly allSubsets: boolean;
   /** The weight of each solved part (see `CaseSolutions.parts`). */
   readonly weights: Float64Array;
 }
@@ -97,15 +101,18 @@ export function arrangementsOf(solved: CaseSolutions, combinations: readonly Com
     found.add("pattern-cap-too-large", ["options", "cap"], `A pattern cap of ${cap} spans could ask for ${2 ** cap} patterns of one case; the most that is searched is ${MAX_PATTERN_CAP} (${2 ** MAX_PATTERN_CAP} patterns). Beyond the cap the standard patterns are used.`, { cap, count: 2 ** cap });
   found.throwIfAny();
   const out: LoadArrangement[] = [];
-  const seen = new Set<string>();
+  // equal weights are found by a hash of the weights, then compared exactly
+  const seen = new Map<number, Float64Array[]>();
   let count = 0;
   combinations.forEach((c, ci) => {
     const patterned = solved.cases.filter((k) => k.patterned === true && (c.factors[k.name] ?? 0) !== 0);
     let patterns: { pattern: Record<string, number[]>; words: string[] }[] = [{ pattern: {}, words: [] }];
+    let allSubsets = true;
     for (const k of patterned) {
       const spans = solved.parts.filter((p) => p.case === k.name && p.span !== undefined).map((p) => p.span as number);
       if (spans.length < 2) continue;
       const sets = spanSets(spans, cap);
+      if (spans.length > cap) allSubsets = false;
       patterns = patterns.flatMap((p) => sets.map((s) => ({ pattern: { ...p.pattern, [k.name]: s }, words: [...p.words, `${k.name} on ${spansInWords(solved, s, spans)}`] })));
     }
     count += patterns.length;
@@ -115,11 +122,14 @@ export function arrangementsOf(solved: CaseSolutions, combinations: readonly Com
     }
     for (const p of patterns) {
       const weights = weightsFor(solved, c.factors, p.pattern);
-      const key = Array.from(weights).join(",");
-      if (seen.has(key)) continue;
-      seen.add(key);
+      let key = 0;
+      for (let i = 0; i < weights.length; i++) key = key * 31.0001 + (weights[i] as number);
+      const same = seen.get(key);
+      if (same !== undefined && same.some((w) => w.every((v, i) => v === weights[i]))) continue;
+      if (same === undefined) seen.set(key, [weights]);
+      else same.push(weights);
       const description = p.words.join(", ");
-      out.push(Object.freeze({ combination: ci, combinationName: c.name, pattern: Object.freeze(p.pattern), description, name: description.length === 0 ? c.name : `${c.name}, ${description}`, weights }));
+      out.push(Object.freeze({ combination: ci, combinationName: c.name, pattern: Object.freeze(p.pattern), description, name: description.length === 0 ? c.name : `${c.name}, ${description}`, factors: c.factors, allSubsets, weights }));
     }
   });
   return Object.freeze(out);
