@@ -1,4 +1,4 @@
-import type { Reaction } from "../beam/index.js";
+import type { BeamSpan, Reaction } from "../beam/index.js";
 import { describeValue, fail, IssueCollector, requireFinite, unknownKeyHint } from "../errors/index.js";
 import { makePiecewise, type PiecewisePolynomial } from "../math/piecewise.js";
 import { DEGREES, type CasePart, type CaseSolutions, type DiagramName } from "./case-solutions.js";
@@ -10,8 +10,16 @@ import { isRecord } from "./validate.js";
  */
 export type SpanPattern = Readonly<Record<string, readonly number[]>>;
 
-/** A combination formed by superposition: reactions and the four diagrams, exact piecewise polynomials. */
+/**
+ * A combination formed by superposition: reactions and the four diagrams, exact piecewise
+ * polynomials, with the member's length and spans: what the member checks of `flexura/check` read
+ * (`checkMember(combined, sections, limits)` checks one combination).
+ */
 export interface CombinedResult {
+  /** Member length (length units). */
+  readonly length: number;
+  /** The spans and cantilevers, left to right. */
+  readonly spans: readonly BeamSpan[];
   /** One reaction per support, in the member's order: force up positive, moment counterclockwise positive. */
   readonly reactions: readonly Reaction[];
   /** Shear V(x) (force units), degree 2. */
@@ -126,6 +134,8 @@ export function combineCases(solved: CaseSolutions, factors: Readonly<Record<str
     return makePiecewise(solved.breaks.slice(), out, DEGREES[name]);
   };
   return Object.freeze({
+    length: solved.length,
+    spans: solved.spans,
     reactions: Object.freeze(combineReactions(solved, weights)),
     shear: diagram("shear"),
     moment: diagram("moment"),

@@ -28,11 +28,11 @@ const arbCombinations = fc.array(fc.tuple(arbFactor, arbFactor, arbFactor), { mi
 const DIAGRAMS = ["shear", "moment", "slope", "deflection"] as const;
 
 describe("envelopes laws on random members", () => {
-  test.prop([arbMember({ settlements: false }), fc.array(fc.nat(), { minLength: 12, maxLength: 12 }), arbCombinations], { numRuns: 25 })(
-    "each bound is beyond every arrangement at every x and equals the arrangement its piece names",
-    (member, picks, combinations) => {
+  test.prop([arbMember({ settlements: false }), fc.array(fc.nat(), { minLength: 12, maxLength: 12 }), arbCombinations, fc.integer({ min: 1, max: 8 })], { numRuns: 25 })(
+    "each bound is beyond every arrangement at every x and equals the arrangement its piece names (all subsets or standard patterns)",
+    (member, picks, combinations, cap) => {
       const solved = solveCases(withCases(member, picks), CASES);
-      const e = envelopes(solved, combinations);
+      const e = envelopes(solved, combinations, { pattern: { cap } });
       const curves = e.arrangements.map((a) => combineCases(solved, combinations[a.combination]!.factors, a.pattern));
       const xs = [...samplePoints(member.length, 13), ...Array.from(solved.breaks)];
       for (const d of DIAGRAMS) {
