@@ -133,7 +133,9 @@ function factored(loads: readonly Load[], options: SolveOptions | undefined): re
   if (factors === undefined) return loads;
   const out: Load[] = [];
   for (const l of loads) {
-    const f = factors[l.case ?? DEFAULT_LOAD_CASE] ?? 0;
+    // own properties only: a case named "constructor" or "__proto__" is a case name, not Object.prototype's
+    const name = l.case ?? DEFAULT_LOAD_CASE;
+    const f = Object.prototype.hasOwnProperty.call(factors, name) ? (factors[name] as number) : 0;
     if (f === 0) continue;
     switch (l.kind) {
       case "point":

@@ -1,13 +1,14 @@
 import { attempt, type Result } from "../errors/index.js";
 import { loadResultant } from "../loads/index.js";
 import { buildModel } from "./model.js";
-import { recoverDiagrams, recoverReactions, type Diagrams } from "./recover.js";
+import { recoverDiagrams, recoverReactions } from "./recover.js";
 import { acquireScratch, releaseScratch } from "./scratch.js";
 import { peaksOf } from "./peaks.js";
 import { balanceWarnings, conditioningWarnings, spansOf } from "./results.js";
 import { checkStability } from "./stability.js";
 import { solveStiffness } from "./stiffness.js";
-import type { BeamInput, BeamResidual, BeamSolution, BeamSpan, BeamWarning, Reaction, SolveOptions } from "./types.js";
+import { refuseOverflow } from "./overflow.js";
+import type { BeamInput, BeamSolution, SolveOptions } from "./types.js";
 import { validateBeam } from "./validate.js";
 
 /**
@@ -27,8 +28,9 @@ import { validateBeam } from "./validate.js";
  *
  * @throws FlexuraError with every input problem at once (`length-not-positive`,
  *   `stiffness-not-positive`, `stiffness-not-tiling`, `load-outside-member`, `support-duplicate`,
- *   `not-finite`, ...; see docs/errors.md), or a `mechanism` / `no-horizontal-restraint` for a
- *   member its supports cannot hold.
+ *   `not-finite`, ...; see docs/errors.md), a `mechanism` for a member its supports cannot hold,
+ *   or `result-not-finite` for loads, factors or settlements too large for double precision. A
+ *   member held only by rollers and springs is solved, with a `no-horizontal-restraint` warning.
  * @example
  * ```ts
  * // 6 m simple span, uniform 5 kN/m, E I = 20,000 kN m^2
@@ -45,7 +47,7 @@ import { validateBeam } from "./validate.js";
  */
 export function solveBeam(beam: BeamInput, options?: SolveOptions): BeamSolution {
   validateBeam(beam, options);
-  checkStability(beam.length, beam.supports, beam.hinges ?? []);
+  const axial = checkStability(beam.length, beam.supports, beam.hinges ?? []);
   const scratch = acquireScratch();
   try {
     const model = buildModel(beam, options, scratch);
@@ -61,38 +63,26 @@ export function solveBeam(beam: BeamInput, options?: SolveOptions): BeamSolution
     }
     const warnings = conditioningWarnings(model, beam.supports, result.pivotRatio);
     for (const w of balanceWarnings(model, result, beam.supports, scratch)) warnings.push(w);
-    return solution(beam.length, Object.freeze(reactions), diagrams, Object.freeze({ force, moment }), Object.freeze(warnings), Object.freeze(spansOf(beam.length, beam.supports)));
+    for (const w of axial) warnings.push(w);
+    const residual = Object.freeze({ force, moment });
+    const { peaks, contraflexure } = peaksOf(diagrams);
+    refuseOverflow(beam, options, { reactions, residual, peaks, diagrams: [diagrams.shear, diagrams.moment, diagrams.slope, diagrams.deflection] });
+    return Object.freeze({
+      length: beam.length,
+      reactions: Object.freeze(reactions),
+      shear: diagrams.shear,
+      moment: diagrams.moment,
+      slope: diagrams.slope,
+      deflection: diagrams.deflection,
+      peaks,
+      contraflexure,
+      residual,
+      warnings: Object.freeze(warnings),
+      spans: Object.freeze(spansOf(beam.length, beam.supports)),
+    });
   } finally {
     releaseScratch(scratch);
   }
-}
-
-/**
- * The solution as an immutable value: plain frozen data (no getters, which V8 builds far more
- * slowly than data properties), so it spreads, serialises and compares like any object.
- */
-function solution(
-  length: number,
-  reactions: readonly Reaction[],
-  diagrams: Diagrams,
-  residual: BeamResidual,
-  warnings: readonly BeamWarning[],
-  spans: readonly BeamSpan[],
-): BeamSolution {
-  const { peaks, contraflexure } = peaksOf(diagrams);
-  return Object.freeze({
-    length,
-    reactions,
-    shear: diagrams.shear,
-    moment: diagrams.moment,
-    slope: diagrams.slope,
-    deflection: diagrams.deflection,
-    peaks,
-    contraflexure,
-    residual,
-    warnings,
-    spans,
-  });
 }
 
 /**

@@ -1,5 +1,6 @@
 import { FlexuraError, issue } from "../errors/index.js";
 import { restrainsAxis, restrainsDeflection, restrainsRotation, type Support } from "../supports/index.js";
+import type { BeamWarning } from "./types.js";
 
 /** A rigid-body motion of one part: deflection at its left end and rotation times its length. */
 type Motion = readonly [number, number];
@@ -11,14 +12,20 @@ function mechanism(reason: string, path: readonly (string | number)[], message: 
 }
 
 /**
- * Checks, before any arithmetic on stiffness, that the supports and hinges hold the member: it
- * must be held along its axis, and no part between hinges may move as a rigid body. The member
- * is a chain of rigid parts joined at hinges; each support removes motions of its part, and a
- * hinge passes on only the deflection of its point. Springs count as supports.
+ * Checks, before any arithmetic on stiffness, that the supports and hinges hold the member in
+ * bending: no part between hinges may move as a rigid body. The member is a chain of rigid parts
+ * joined at hinges; each support removes motions of its part, and a hinge passes on only the
+ * deflection of its point. Springs count as supports.
  *
- * @throws FlexuraError `no-horizontal-restraint` or `mechanism` (with `reason`, `from`, `to`).
+ * A member that no support holds along its axis (rollers and springs only) is not a bending
+ * mechanism: first-order bending carries no axial force, so it is solved, with a
+ * `no-horizontal-restraint` warning (returned), after the bending checks, so that a real
+ * mechanism is always reported by its own cause.
+ *
+ * @returns the warnings (none, or `no-horizontal-restraint`).
+ * @throws FlexuraError `mechanism` (with `reason`, `from`, `to`).
  */
-export function checkStability(length: number, supports: readonly Support[], hinges: readonly number[]): void {
+export function checkStability(length: number, supports: readonly Support[], hinges: readonly number[]): BeamWarning[] {
   if (supports.length === 0)
     mechanism("no-supports", ["supports"], "The member has no supports and would move freely: add a pin and a roller, or one fixed support.", { from: 0, to: length });
   if (!supports.some(restrainsDeflection))
@@ -28,10 +35,6 @@ export function checkStability(length: number, supports: readonly Support[], hin
       "No support holds deflection (guided supports and rotational springs let the member move up and down): add a pin, roller, fixed support or translational spring.",
       { from: 0, to: length },
     );
-  if (!supports.some(restrainsAxis))
-    throw new FlexuraError([
-      issue("no-horizontal-restraint", ["supports"], "No support holds the member along its axis (rollers and springs let it slide): make one support a pin, fixed or guided.", {}),
-    ]);
   const order = hinges.length === 0 ? [] : hinges.map((at, index) => ({ at, index })).sort((a, b) => a.at - b.at);
   const sorted = inOrder(supports) ? supports : [...supports].sort((a, b) => a.at - b.at);
   const close = 1e-10 * length;
@@ -67,7 +70,7 @@ export function checkStability(length: number, supports: readonly Support[], hin
           to: b,
         });
       }
-      return;
+      return axialWarnings(supports);
     }
     // the hinge at b passes on only the deflection of its point: (v, theta*span) -> v + theta*span
     const hingeIndex = (order[p] as { index: number }).index;
@@ -85,6 +88,19 @@ export function checkStability(length: number, supports: readonly Support[], hin
             [0, 1],
           ];
   }
+  return axialWarnings(supports);
+}
+
+/** The `no-horizontal-restraint` warning when no support holds the member along its axis. */
+function axialWarnings(supports: readonly Support[]): BeamWarning[] {
+  if (supports.some(restrainsAxis)) return [];
+  return [
+    Object.freeze({
+      code: "no-horizontal-restraint",
+      message:
+        "No support holds the member along its axis (rollers and springs only). The bending results stand, since first-order bending carries no axial force, but any axial load or friction would need a pin, fixed or guided support.",
+    }),
+  ];
 }
 
 /** True when the supports come sorted by position (the usual case: no copy or sort needed). */

@@ -27,7 +27,7 @@ export function sheetReactions(...args: SheetMemberArgs): SheetValue {
   const a = analysed(args);
   if (!isAnalysis(a)) return a;
   const u = a.units;
-  return [["support", `at (${u.length})`, `force (${u.force})`, `moment (${u.moment})`], ...a.reactions.map((r): CellValue[] => [r.support, r.at, r.force, r.moment])];
+  return [["support", `at (${u.length})`, `force (${u.force})`, `moment (${u.moment})`], ...a.reactions.map((r): CellValue[] => [r.support + 1, r.at, r.force, r.moment])];
 }
 
 type Quantity = "shear" | "moment" | "slope" | "deflection";

@@ -1,4 +1,4 @@
-import { cellQuantity, cellWord, isBlank, rangeRows, sheetError, shown, type SheetError } from "./cells.js";
+import { cellQuantity, cellWord, isBlank, isSheetError, rangeRows, sheetError, shown, type SheetError } from "./cells.js";
 
 /** Plain JSON of a model file (docs/model-format.md), as built from cells. */
 export type ModelJson = Record<string, unknown>;
@@ -12,6 +12,8 @@ export const SHEET_UNIT_SYSTEMS = ["siNewtonMetre", "siKilonewtonMetre", "siNewt
 /**
  * Builds a model file's JSON from a member given cell by cell:
  * - `length`, `E` (modulus unit) and `I` (second-moment unit): cells, numbers in the sheet's units or text with units;
+ *   `I` may instead be a range of rows `start | end | I | E` for a stepped member (E blank: the `E` argument's),
+ *   or blank when a section gives the stiffness; a blank `E` is left out (a segment or material gives it);
  * - `supports`: rows of `position | kind | value`, kind `pin`, `roller`, `fixed`, `guided` or `spring`; value is the
  *   spring's stiffness for `spring`, else an optional settlement (positive downward);
  * - `loads`: rows of `kind | position | end position | value | end value | case`: `point` and `moment` use
@@ -29,11 +31,13 @@ export function memberModelJson(length: unknown, E: unknown, I: unknown, support
   const loadRows = rangeRows(loads);
   if (supportRows === undefined) return sheetError("sheet-range-invalid", "supports: give a range of rows: position | kind | value.");
   if (loadRows === undefined) return sheetError("sheet-range-invalid", "loads: give a range of rows: kind | position | end position | value | end value | case.");
+  const stiffness = stiffnessJson(I);
+  if (isSheetError(stiffness)) return stiffness;
   const model: ModelJson = {
     ...(system === undefined ? {} : { units: { system } }),
     length: cellQuantity(length),
-    E: cellQuantity(E),
-    I: cellQuantity(I),
+    ...(isBlank(E) ? {} : { E: cellQuantity(E) }),
+    ...stiffness,
     supports: [] as unknown[],
     loads: [] as unknown[],
   };
@@ -67,20 +71,51 @@ export function memberModelJson(length: unknown, E: unknown, I: unknown, support
   return model;
 }
 
+/**
+ * The member's stiffness from the `I` argument: one cell is the second moment of the whole member; a range of
+ * rows `start | end | I | E` is a stepped member (the model's `segments`), each row a stretch of constant
+ * stiffness, E blank for the `E` argument's; a blank `I` leaves the stiffness to a section.
+ */
+function stiffnessJson(I: unknown): Readonly<Record<string, unknown>> | SheetError {
+  const rows = rangeRows(I);
+  if (rows === undefined) return sheetError("sheet-range-invalid", "I: give one cell, or rows of start | end | I | E.");
+  const single = rows.length <= 1 && (rows[0] ?? []).filter((c) => !isBlank(c)).length <= 1;
+  if (single) {
+    const value = (rows[0] ?? []).find((c) => !isBlank(c));
+    return value === undefined ? {} : { I: cellQuantity(value) };
+  }
+  const segments: unknown[] = [];
+  for (const [i, row] of rows.entries()) {
+    if (row.every((c) => isBlank(c))) {
+      return sheetError("sheet-range-invalid", `I row ${i + 1}: a blank row between segments; the segments must cover the member from 0 to its length, in order.`);
+    }
+    const E = cellQuantity(row[3]);
+    segments.push({ from: cellQuantity(row[0]), to: cellQuantity(row[1]), I: cellQuantity(row[2]), ...(E === undefined ? {} : { E }) });
+  }
+  return { segments };
+}
+
 /** The words a sheet user sees for a model path's fields, by range. */
 const COLUMN_WORDS: Readonly<Record<string, Readonly<Record<string, string>>>> = {
   supports: { at: "position", type: "kind", stiffness: "value (spring stiffness)", settlement: "value (settlement)" },
   loads: { type: "kind", at: "position", from: "position", to: "end position", value: "value", start: "value", end: "end value", case: "case" },
+  segments: { from: "start", to: "end", I: "I", E: "E" },
 };
+
+/** The argument a model path's range belongs to. */
+const RANGE_ARGUMENT: Readonly<Record<string, string>> = { supports: "supports", loads: "loads", segments: "I" };
 
 /** A model path (`["loads", 2, "at"]`) in the sheet's words: `loads row 3, position`. */
 export function sheetPlace(path: readonly (string | number)[]): string {
   const [first, index, field] = path;
-  if ((first === "supports" || first === "loads") && typeof index === "number") {
+  if (typeof first === "string" && Object.hasOwn(RANGE_ARGUMENT, first) && typeof index === "number") {
     const words = COLUMN_WORDS[first]!;
     const column = typeof field === "string" && Object.hasOwn(words, field) ? `, ${words[field]}` : "";
-    return `${first} row ${index + 1}${column}`;
+    return `${RANGE_ARGUMENT[first]} row ${index + 1}${column}`;
   }
+  if (first === "segments") return "I";
+  if (first === "section") return path.length === 1 ? "section" : path[1] === "shape" ? "shape" : `dimensions, ${path.slice(1).map(String).join(".")}`;
+  if (first === "limits") return path.length === 1 ? "limits" : `limits, ${path.slice(1).map(String).join(".")}`;
   if (path.length === 0) return "member";
   return path.map(String).join(".");
 }

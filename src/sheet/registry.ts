@@ -1,5 +1,7 @@
 import { sheetError, type SheetValue } from "./cells.js";
+import { sheetChecks, sheetUtilisation } from "./checks.js";
 import { sheetDeflection, sheetModelResult, sheetMoment, sheetPeaks, sheetReactions, sheetShear, sheetSlope, sheetStations } from "./functions.js";
+import { sheetBendingStress, sheetSection, sheetSectionProperty, sheetShearStress } from "./section.js";
 
 /** One argument of a spreadsheet function: its name, whether it takes a range, and what goes in it. */
 export interface SheetParameter {
@@ -33,12 +35,18 @@ const range = (name: string, summary: string): SheetParameter => Object.freeze({
 const MEMBER: readonly SheetParameter[] = [
   cell("length", "Member length (length unit, or text with a unit such as \"6 m\")."),
   cell("E", "Modulus of elasticity (modulus unit, or text such as \"200 GPa\")."),
-  cell("I", "Second moment of area (section unit^4, or text such as \"80e6 mm^4\")."),
+  range("I", "Second moment of area (section unit^4, or text such as \"80e6 mm^4\"), or rows of start | end | I | E for a stepped member."),
   range("supports", "Rows of position | kind (pin, roller, fixed, guided, spring) | spring stiffness or settlement."),
   range("loads", "Rows of kind (point, moment, distributed) | position | end position | value | end value | case; forces down positive."),
   cell("units", "Optional unit set: siNewtonMetre, siKilonewtonMetre, siNewtonMillimetre, usKipFoot, usKipInch; blank: m, kN, mm, MPa."),
 ];
 const X = cell("x", "Position from the left end (length unit).");
+const SECTION: readonly SheetParameter[] = [
+  cell("shape", "Shape: rectangle, circle, pipe, i-section, tee, channel, angle, rectangular-hollow, plate-girder."),
+  range("dimensions", "Rows of name | value, such as depth | 310 (section-length unit, or text with a unit)."),
+];
+const UNITS = MEMBER[5]!;
+const LIMITS = range("limits", "Rows of name | value: deflection | span/360 (or a length), bendingStress | 165 MPa, shearStress | 95 MPa.");
 
 const entry = (name: string, parameters: readonly SheetParameter[], required: number, returns: "table" | "value", summary: string, call: (...args: never[]) => SheetValue): SheetFunction =>
   Object.freeze({ name, parameters: Object.freeze([...parameters]), required, returns, summary, call: guarded(name, parameters, required, call as (...args: unknown[]) => SheetValue) });
@@ -70,6 +78,12 @@ export const sheetFunctions: readonly SheetFunction[] = Object.freeze([
   entry("FLEXURA.DEFLECTION", [X, ...MEMBER], 6, "value", "Deflection at x, positive upward.", sheetDeflection),
   entry("FLEXURA.PEAKS", MEMBER, 5, "table", "Largest and smallest shear, moment, slope and deflection, with where they occur.", sheetPeaks),
   entry("FLEXURA.STATIONS", [cell("intervals", "Number of equal intervals, 1 to 10,000 (a station at each end of each)."), ...MEMBER], 6, "table", "x, shear, moment and deflection at evenly spaced stations, for a chart.", sheetStations),
+  entry("FLEXURA.SECTION", [...SECTION, UNITS], 2, "table", "A section's properties: area, centroid, second moments, section moduli, extreme fibres.", sheetSection),
+  entry("FLEXURA.SECTIONPROPERTY", [cell("property", "A property name: area, secondMomentZ, sectionModulusTop, centroid.y, ..."), ...SECTION, UNITS], 3, "value", "One property of a section, by name.", sheetSectionProperty),
+  entry("FLEXURA.BENDINGSTRESS", [cell("moment", "Bending moment, positive sagging (moment unit)."), cell("y", "Fibre height above the centroid, negative below (section-length unit)."), ...SECTION, UNITS], 4, "value", "Bending stress at a fibre, -M y / I, tension positive.", sheetBendingStress),
+  entry("FLEXURA.SHEARSTRESS", [cell("shear", "Shear force (force unit)."), cell("y", "Height of the cut above the centroid, negative below (section-length unit)."), ...SECTION, UNITS], 4, "value", "Shear stress at a horizontal cut, V Q / (I b), with the sign of V.", sheetShearStress),
+  entry("FLEXURA.CHECKS", [LIMITS, ...SECTION, ...MEMBER], 8, "table", "The member's checks against the limits: demand, capacity, utilisation, pass, where.", sheetChecks),
+  entry("FLEXURA.UTILISATION", [LIMITS, ...SECTION, ...MEMBER], 8, "value", "The governing utilisation of the member's checks against the limits (at most 1 passes).", sheetUtilisation),
   entry("FLEXURA.MODEL", [cell("model", "A model file's JSON text (docs/model-format.md)."), cell("path", "A result path such as moment.max.value or reactions[0].force.")], 2, "value", "Any result of a model given as JSON text, by a path such as moment.max.value.", sheetModelResult),
 ]);
 

@@ -24,7 +24,7 @@ export function clearSheetCache(): void {
 }
 
 /** The library's error as the cell shows it: every issue, in the sheet's words. */
-function cellMessage(error: unknown): SheetError {
+export function cellMessage(error: unknown): SheetError {
   if (!isFlexuraError(error)) return sheetError("sheet-internal-error", `flexura failed unexpectedly: ${String(error)}. Please report it with the sheet.`);
   const first = error.issues[0];
   const text = error.issues.map((i) => `${sheetPlace(i.path)}: ${i.message}`).join(" ");

@@ -165,8 +165,14 @@ describe("solveBeam(mechanism)", () => {
     `);
   });
 
-  it("all rollers: nothing holds the member along its axis", () => {
-    expect(mech({ length: 4, stiffness: 1, supports: [{ kind: "roller", at: 0 }, { kind: "roller", at: 4 }] })?.code).toBe("no-horizontal-restraint");
+  it("all rollers: nothing holds the member along its axis, which bending does not need: solved, with a warning", () => {
+    expect(mech({ length: 4, stiffness: 1, supports: [{ kind: "roller", at: 0 }, { kind: "roller", at: 4 }] })).toBeUndefined();
+    const s = solveBeam({ length: 4, stiffness: 1, supports: [{ kind: "roller", at: 0 }, { kind: "roller", at: 4 }] });
+    expect(s.warnings.map((w) => w.code)).toEqual(["no-horizontal-restraint"]);
+  });
+
+  it("all rollers with a hinge over nothing: the hinge mechanism is reported, not the missing axial restraint", () => {
+    expect(mech({ length: 4, stiffness: 1, hinges: [2], supports: [{ kind: "roller", at: 0 }, { kind: "roller", at: 4 }] })).toMatchObject({ code: "mechanism", reason: "hinge", path: "hinges.0" });
   });
 
   it("guided supports only: nothing holds deflection", () => {

@@ -9,7 +9,7 @@ import { join, resolve } from "node:path";
 import { createContext, runInContext, type Context } from "node:vm";
 import { generateCustomFunctionsMetadata, parseTree } from "custom-functions-metadata";
 import { afterAll, beforeAll, describe, expect, test } from "vitest";
-import { callSheetFunction, sheetFunctions } from "../../src/sheet/index.js";
+import { callSheetFunction, isSheetError, sheetFunctions } from "../../src/sheet/index.js";
 
 const root = resolve(import.meta.dirname, "../..");
 const dir = mkdtempSync(join(tmpdir(), "flexura-sheet-bundle-"));
@@ -40,12 +40,21 @@ function call(context: Context, name: string, args: unknown[]): unknown {
 // An invented floor beam: 6 m, E 200 GPa, I 80e6 mm^4, pin and roller, 12 kN/m and 20 kN at 2 m.
 // A host hands blank cells as empty text.
 const member = [6, "200 GPa", "80e6 mm^4", [[0, "pin", ""], [6, "roller", ""], ["", "", ""]], [["distributed", "", "", 12, "", ""], ["point", 2, "", 20, "", ""]], ""];
-const argsFor = (name: string): unknown[] =>
-  name === "FLEXURA.MODEL"
-    ? [JSON.stringify({ length: 6, E: "200 GPa", I: "80e6 mm^4", supports: [{ at: 0, type: "pin" }, { at: 6, type: "roller" }], loads: [{ type: "distributed", start: 12 }] }), "moment.max.value"]
-    : name === "FLEXURA.REACTIONS" || name === "FLEXURA.PEAKS"
-      ? member
-      : [name === "FLEXURA.STATIONS" ? 12 : 2.5, ...member];
+const rect = [["width", 100], ["depth", 200]];
+const limits = [["deflection", "span/360"], ["bendingStress", "165 MPa"]];
+const ARGS: Readonly<Record<string, unknown[]>> = {
+  "FLEXURA.MODEL": [JSON.stringify({ length: 6, E: "200 GPa", I: "80e6 mm^4", supports: [{ at: 0, type: "pin" }, { at: 6, type: "roller" }], loads: [{ type: "distributed", start: 12 }] }), "moment.max.value"],
+  "FLEXURA.REACTIONS": member,
+  "FLEXURA.PEAKS": member,
+  "FLEXURA.STATIONS": [12, ...member],
+  "FLEXURA.SECTION": ["rectangle", rect, ""],
+  "FLEXURA.SECTIONPROPERTY": ["secondMomentZ", "rectangle", rect, ""],
+  "FLEXURA.BENDINGSTRESS": [10, 100, "rectangle", rect, ""],
+  "FLEXURA.SHEARSTRESS": [30, 0, "rectangle", rect, ""],
+  "FLEXURA.CHECKS": [limits, "rectangle", rect, 6, "200 GPa", "", ...member.slice(3)],
+  "FLEXURA.UTILISATION": [limits, "rectangle", rect, 6, "200 GPa", "", ...member.slice(3)],
+};
+const argsFor = (name: string): unknown[] => ARGS[name] ?? [2.5, ...member];
 const blankAsEmpty = (v: unknown): unknown => (Array.isArray(v) ? v.map((row: unknown[]) => row.map((c) => (c === null ? "" : c))) : v);
 
 describe("the script bundle", () => {
@@ -61,6 +70,7 @@ describe("the script bundle", () => {
     const context = load();
     for (const f of sheetFunctions) {
       expect(runInContext(`typeof ${globalName(f.name)}`, context), f.name).toBe("function");
+      expect(isSheetError(callSheetFunction(f.name, argsFor(f.name))), f.name).toBe(false);
       const got = call(context, globalName(f.name), argsFor(f.name));
       expect(got, f.name).toEqual(blankAsEmpty(JSON.parse(JSON.stringify(callSheetFunction(f.name, argsFor(f.name))))));
     }

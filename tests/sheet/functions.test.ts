@@ -30,6 +30,7 @@ describe("sheet functions", () => {
     const table = sheetReactions(...member) as unknown[][];
     expect(table[0]).toEqual(["support", "at (m)", "force (kN)", "moment (kN*m)"]);
     expect(table[1]![2]).toBeCloseTo(36 + 80 / 6, 10);
+    expect(table.map((r) => r[0])).toEqual(["support", 1, 2]); // numbered from 1, as the supports range's rows
     expect(sheetMoment(2, ...member)).toBeCloseTo((36 + 80 / 6) * 2 - 24, 10);
     const udlOnly = [6, "200 GPa", "80e6 mm^4", supports, [loads[0]]] as const;
     const EI = 200e9 * 80e6 * 1e-12; // N m^2
