@@ -104,16 +104,24 @@ export function arrangementsOf(solved: CaseSolutions, combinations: readonly Com
   // equal weights are found by a hash of the weights, then compared exactly
   const seen = new Map<number, Float64Array[]>();
   let count = 0;
+  // the span sets of each patterned case and their words, formed once
+  const searches = new Map<string, { sets: number[][]; words: string[]; all: boolean }>();
   combinations.forEach((c, ci) => {
     const patterned = solved.cases.filter((k) => k.patterned === true && (c.factors[k.name] ?? 0) !== 0);
     let patterns: { pattern: Record<string, number[]>; words: string[] }[] = [{ pattern: {}, words: [] }];
     let allSubsets = true;
     for (const k of patterned) {
-      const spans = solved.parts.filter((p) => p.case === k.name && p.span !== undefined).map((p) => p.span as number);
-      if (spans.length < 2) continue;
-      const sets = spanSets(spans, cap);
-      if (spans.length > cap) allSubsets = false;
-      patterns = patterns.flatMap((p) => sets.map((s) => ({ pattern: { ...p.pattern, [k.name]: s }, words: [...p.words, `${k.name} on ${spansInWords(solved, s, spans)}`] })));
+      let search = searches.get(k.name);
+      if (search === undefined) {
+        const spans = solved.parts.filter((p) => p.case === k.name && p.span !== undefined).map((p) => p.span as number);
+        const sets = spans.length < 2 ? [] : spanSets(spans, cap);
+        search = { sets, words: sets.map((s) => `${k.name} on ${spansInWords(solved, s, spans)}`), all: spans.length <= cap };
+        searches.set(k.name, search);
+      }
+      if (search.sets.length === 0) continue;
+      if (!search.all) allSubsets = false;
+      const { sets, words } = search;
+      patterns = patterns.flatMap((p) => sets.map((s, i) => ({ pattern: { ...p.pattern, [k.name]: s }, words: [...p.words, words[i] as string] })));
     }
     count += patterns.length;
     if (count > MAX_ARRANGEMENTS) {
