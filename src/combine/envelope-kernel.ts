@@ -11,6 +11,15 @@ const BINOMIAL = (() => {
   return b;
 })();
 
+/** The power-to-Bernstein factors C(j, i) / C(d, i) for each degree d up to 8: TO_BERNSTEIN[d * 81 + j * 9 + i]. */
+const TO_BERNSTEIN = (() => {
+  const t = new Float64Array(9 * 81);
+  for (let d = 0; d <= 8; d++) for (let j = 0; j <= d; j++) for (let i = 0; i <= j; i++) t[d * 81 + j * 9 + i] = (BINOMIAL[j * 9 + i] as number) / (BINOMIAL[d * 9 + i] as number);
+  return t;
+})();
+
+const scaled = new Float64Array(9);
+
 /**
  * Bernstein coefficients of the polynomial `c[o..o+d]` (local basis) on `[0, h]` into `out[oo..oo+d]`:
  * the polynomial lies between the smallest and the largest of them (the convex hull property).
@@ -18,13 +27,15 @@ const BINOMIAL = (() => {
 export function bernsteinInto(c: Float64Array, o: number, d: number, h: number, out: Float64Array, oo: number): void {
   let hp = 1;
   for (let i = 0; i <= d; i++) {
-    out[oo + i] = 0;
-  }
-  for (let i = 0; i <= d; i++) {
-    const bi = (c[o + i] as number) * hp;
+    scaled[i] = (c[o + i] as number) * hp;
     hp *= h;
-    const cdi = BINOMIAL[d * 9 + i] as number;
-    for (let j = i; j <= d; j++) out[oo + j] = (out[oo + j] as number) + ((BINOMIAL[j * 9 + i] as number) / cdi) * bi;
+  }
+  const base = d * 81;
+  for (let j = 0; j <= d; j++) {
+    let v = 0;
+    const row = base + j * 9;
+    for (let i = 0; i <= j; i++) v += (TO_BERNSTEIN[row + i] as number) * (scaled[i] as number);
+    out[oo + j] = v;
   }
 }
 
