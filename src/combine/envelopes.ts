@@ -14,6 +14,14 @@ export interface GoverningReaction {
   readonly name: string;
 }
 
+/** The largest and smallest value of one reaction component over the arrangements. */
+export interface ReactionRange {
+  /** The largest value (for a force: the largest upward) and its arrangement. */
+  readonly max: GoverningReaction;
+  /** The smallest value (for a force: negative means the support is pulled, uplift) and its arrangement. */
+  readonly min: GoverningReaction;
+}
+
 /** The envelope of one support's reaction. */
 export interface ReactionEnvelope {
   /** Index of the support, in the member's order. */
@@ -21,9 +29,9 @@ export interface ReactionEnvelope {
   /** Position (length units). */
   readonly at: number;
   /** Largest upward force (`max`) and largest downward force (`min`, negative when the support is pulled: uplift). */
-  readonly force: { readonly max: GoverningReaction; readonly min: GoverningReaction };
+  readonly force: ReactionRange;
   /** Largest and smallest moment (zero where the support lets the member turn). */
-  readonly moment: { readonly max: GoverningReaction; readonly min: GoverningReaction };
+  readonly moment: ReactionRange;
 }
 
 /** Options for {@link envelopes}. */

@@ -15,5 +15,5 @@ export type { PatternOptions, LoadArrangement } from "./patterns.js";
 export { arrangementsOf, MAX_PATTERN_CAP, MAX_ARRANGEMENTS } from "./patterns.js";
 export type { GoverningValue, EnvelopeBound, DiagramEnvelope } from "./envelope.js";
 export { envelopeOfDiagram } from "./envelope.js";
-export type { GoverningReaction, ReactionEnvelope, EnvelopeOptions, Envelopes } from "./envelopes.js";
+export type { GoverningReaction, ReactionRange, ReactionEnvelope, EnvelopeOptions, Envelopes } from "./envelopes.js";
 export { envelopes, tryEnvelopes } from "./envelopes.js";
