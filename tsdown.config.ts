@@ -11,6 +11,7 @@ export const entries = {
   stress: "src/stress/index.ts",
   check: "src/check/index.ts",
   sheet: "src/sheet/index.ts",
+  design: "src/design/index.ts",
   combine: "src/combine/index.ts",
 } as const;
 

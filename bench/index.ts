@@ -13,6 +13,7 @@ import "./section.bench.js";
 import "./model.bench.js";
 import "./sheet.bench.js";
 import "./combine.bench.js";
+import "./design.bench.js";
 
 const pattern = process.argv[2];
 await runAll(pattern ? new RegExp(pattern) : undefined);

@@ -1,0 +1,12 @@
+export type { IShapeForDesign, SteelForDesign } from "./shape.js";
+export { checkIShape, checkSteel } from "./shape.js";
+export type { ElementClass, ElementSlenderness, IShapeClassification } from "./classify.js";
+export { classifyIShape, flangeBucklingCoefficient } from "./classify.js";
+export type { FlexuralLimitState, BucklingLengths, NominalFlexure } from "./flexure.js";
+export { bucklingLengths, nominalFlexure } from "./flexure.js";
+export type { NominalShear } from "./shear.js";
+export { nominalShear } from "./shear.js";
+export type { MomentGradient } from "./moment-gradient.js";
+export { momentGradient } from "./moment-gradient.js";
+export type { DesignMethod, SteelBeamOptions, SteelSegmentCheck, SteelShearCheck, SteelGoverning, SteelBeamCheck } from "./member.js";
+export { checkSteelBeam, tryCheckSteelBeam } from "./member.js";

@@ -1,0 +1,1 @@
+export * from "./aisc360/index.js";
