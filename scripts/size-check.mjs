@@ -21,7 +21,7 @@ const KiB = 1024;
 // 2 December 2026 (docs/performance.md) for validation and messages still being added. Raise a
 // budget deliberately, with the new figure in docs/performance.md, never by habit.
 const paths = [
-  { name: "solveBeam (README's first example)", code: `export { solveBeam } from ${dist("index.js")};`, budget: 12.5 * KiB },
+  { name: "solveBeam (README's first example)", code: `export { solveBeam } from ${dist("index.js")};`, budget: 15 * KiB },
   { name: "sections alone (flexura/section)", code: `export * from ${dist("section.js")};`, budget: 17 * KiB },
   { name: "checkMember (flexura/check)", code: `export { checkMember } from ${dist("check.js")};`, budget: 23.5 * KiB },
   { name: "flexura/combine (cases, presets, envelopes)", code: `export * from ${dist("combine.js")};`, budget: 24 * KiB },

@@ -8,5 +8,6 @@ export type {
   BeamSpan,
   BeamWarning,
   BeamResidual,
+  BeamNote,
 } from "./types.js";
 export { solveBeam, trySolveBeam } from "./solve.js";

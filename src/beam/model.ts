@@ -1,4 +1,5 @@
 import { DEFAULT_LOAD_CASE, type Load } from "../loads/index.js";
+import { elementFlexibility } from "./flexibility.js";
 import { ensureNodes, ensureRaw, type Scratch } from "./scratch.js";
 import type { BeamInput, SolveOptions } from "./types.js";
 import { SAME_POINT } from "./validate.js";
@@ -9,10 +10,12 @@ import { SAME_POINT } from "./validate.js";
  * Pieces: breakpoints at the ends, supports, hinges, stiffness steps and load ends, so that the
  * load on each piece is one linear function and the diagrams are one polynomial per piece.
  *
- * Elements: the stretches between structural nodes only (the ends, supports, hinges and
- * stiffness steps), each of constant E I and carrying all the loads inside it through its exact
- * fixed-end actions. The stiffness system is as small as the structure allows, however many
- * loads there are, and no load makes a short, stiff element.
+ * Elements: the stretches between structural nodes only (the ends, supports and hinges), each
+ * carrying all the loads inside it through its exact fixed-end actions. A stiffness step is not
+ * a node: an element whose E I changes inside it works through its exact flexibility (see
+ * `flexibility.ts`), so a short, very stiff piece adds a little flexibility instead of a huge
+ * stiffness. The stiffness system is as small as the structure allows, however many loads and
+ * steps there are, and neither a load nor a step makes a short, stiff element.
  *
  * Every array is working storage from the solve's {@link Scratch} that may be longer than needed
  * (index them; never read their length). None of them ends up in a result: the results copy what
@@ -29,18 +32,24 @@ export interface BeamModel {
   /** Downward point force and counterclockwise couple applied at each breakpoint. */
   readonly force: Float64Array;
   readonly couple: Float64Array;
+  /** E I of each piece. */
+  readonly ei: Float64Array;
   /** Number of structural nodes (elements + 1). */
   readonly joints: number;
   /** Breakpoint index of each structural node, increasing; first 0, last `nodes - 1`. */
   readonly joint: Int32Array;
-  /** E I of each element. */
-  readonly ei: Float64Array;
   /** 1 where the element's right end is released (a hinge at its right node). */
   readonly released: Uint8Array;
+  /** 1 where the element has one E I throughout (closed-form stiffness); else its flexibility is in `flexibility`. */
+  readonly uniform: Uint8Array;
+  /** Per element, five numbers (see `elementFlexibility`); written only for elements that are not uniform. */
+  readonly flexibility: Float64Array;
   /** Structural node of each support, by support index. */
   readonly supportNode: Int32Array;
   /** The loads that act, with their factors applied. */
   readonly loads: readonly Load[];
+  /** True when two positions closer than the coincidence tolerance, but not equal, were merged into one breakpoint. */
+  readonly merged: boolean;
 }
 
 /**
@@ -152,6 +161,9 @@ function factored(loads: readonly Load[], options: SolveOptions | undefined): re
   return out;
 }
 
+/** Set by {@link breakpoints}: true when it merged two positions that were close but not equal. */
+let mergedInexact = false;
+
 /** The sorted, merged breakpoints of a member: ends, supports, hinges, steps and load ends. */
 function breakpoints(beam: BeamInput, loads: readonly Load[], scratch: Scratch): number {
   const length = beam.length;
@@ -178,7 +190,12 @@ function breakpoints(beam: BeamInput, loads: readonly Load[], scratch: Scratch):
   // merge points closer than the tolerance; the last one is exactly the length
   const tol = SAME_POINT * length;
   let n = 1;
-  for (let i = 1; i < count; i++) if ((raw[i] as number) - (raw[n - 1] as number) > tol) raw[n++] = raw[i] as number;
+  mergedInexact = false;
+  for (let i = 1; i < count; i++) {
+    const gap = (raw[i] as number) - (raw[n - 1] as number);
+    if (gap > tol) raw[n++] = raw[i] as number;
+    else if (gap > 0) mergedInexact = true;
+  }
   if (n === 1) n = 2;
   raw[n - 1] = length;
   return n;
@@ -204,7 +221,6 @@ export function buildModel(beam: BeamInput, options: SolveOptions | undefined, s
     mark[i] = (mark[i] as number) | bit;
   };
   for (const s of beam.supports) flag(s.at, 1);
-  for (const s of steps) flag(s.to, 1);
   for (const h of hinges) flag(h, 2);
   const joint = scratch.joint;
   const jointOf = scratch.jointOf;
@@ -216,14 +232,14 @@ export function buildModel(beam: BeamInput, options: SolveOptions | undefined, s
   }
   const ei = scratch.ei;
   const released = scratch.released;
-  let s = 0;
-  for (let e = 0; e + 1 < m; e++) {
-    released[e] = ((mark[joint[e + 1] as number] as number) & 2) >> 1;
-    if (typeof beam.stiffness === "number") ei[e] = beam.stiffness;
-    else {
-      const mid = 0.5 * ((x[joint[e] as number] as number) + (x[joint[e + 1] as number] as number));
+  for (let e = 0; e + 1 < m; e++) released[e] = ((mark[joint[e + 1] as number] as number) & 2) >> 1;
+  if (typeof beam.stiffness === "number") for (let i = 0; i + 1 < n; i++) ei[i] = beam.stiffness;
+  else {
+    let s = 0;
+    for (let i = 0; i + 1 < n; i++) {
+      const mid = 0.5 * ((x[i] as number) + (x[i + 1] as number));
       while (s < steps.length - 1 && (steps[s] as { to: number }).to <= mid) s++;
-      ei[e] = (steps[s] as { stiffness: number }).stiffness;
+      ei[i] = (steps[s] as { stiffness: number }).stiffness;
     }
   }
 
@@ -264,5 +280,7 @@ export function buildModel(beam: BeamInput, options: SolveOptions | undefined, s
     hint = nodeIndex(x, n, (beam.supports[i] as { at: number }).at, hint);
     supportNode[i] = jointOf[hint] as number;
   }
-  return { nodes: n, x, wLeft, wRight, force, couple, joints: m, joint, ei, released, supportNode, loads };
+  const model = { nodes: n, x, wLeft, wRight, force, couple, ei, joints: m, joint, released, uniform: scratch.uniform, flexibility: scratch.flexibility, supportNode, loads, merged: mergedInexact };
+  elementFlexibility(model);
+  return model;
 }

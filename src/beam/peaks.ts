@@ -1,5 +1,6 @@
 import type { Extremes, PiecewisePolynomial } from "../math/index.js";
 import { clearOfZero, evaluatePolynomial, rootsToScratch, scratchRoots } from "../math/polynomial.js";
+import { ROUNDING } from "../math/tolerance.js";
 import type { Diagrams } from "./recover.js";
 import type { BeamPeaks } from "./types.js";
 
@@ -22,10 +23,15 @@ function see(k: number, value: number, x: number): void {
 }
 
 function extremes(k: number): Extremes {
+  // a peak within rounding of zero (ROUNDING of the diagram's largest magnitude) is zero: a
+  // moment that never goes negative reports a minimum of 0, not -1.4e-14
+  const max = running[k] as number;
+  const min = running[k + 2] as number;
+  const floor = ROUNDING * Math.max(Math.abs(max), Math.abs(min));
   // frozen all the way down: a peak's value cannot be written
   return Object.freeze({
-    max: Object.freeze({ value: running[k] as number, at: running[k + 1] as number }),
-    min: Object.freeze({ value: running[k + 2] as number, at: running[k + 3] as number }),
+    max: Object.freeze({ value: Math.abs(max) <= floor ? 0 : max, at: running[k + 1] as number }),
+    min: Object.freeze({ value: Math.abs(min) <= floor ? 0 : min, at: running[k + 3] as number }),
   });
 }
 
@@ -98,10 +104,12 @@ export interface PeaksAndContraflexure {
  * real roots of its derivative, and the derivative of each is the diagram before it (deflection'
  * = slope, slope' = M / E I, M' = V, V' = -w), so each piece's roots are found once and serve
  * twice: the roots of the moment give both the slope's extremes and the points of contraflexure.
+ * A peak whose size is within rounding of zero (1e-10 of the diagram's largest magnitude) is
+ * reported as 0, at the point where it was found.
  *
  * A point of contraflexure: on each piece the moment's roots split it into stretches of one sign
  * (judged at each stretch's midpoint); a sign change between neighbouring stretches is a point
- * of contraflexure. Stretches whose moment is zero to rounding (1e-10 of the largest moment) are
+ * of contraflexure. Stretches whose moment is zero to rounding (`ROUNDING`, 1e-10 of the largest moment) are
  * skipped, so an unloaded overhang, or a hinge where the moment only touches zero, gives none. A
  * jump across zero at an applied couple counts.
  */
@@ -163,7 +171,7 @@ export function peaksOf(diagrams: Diagrams): PeaksAndContraflexure {
 function contraflexure(moment: PiecewisePolynomial, momentRoots: Float64Array, counts: Int32Array, scale: number): number[] {
   const b = moment.breaks;
   const c = moment.coefficients;
-  const zero = 1e-10 * scale;
+  const zero = ROUNDING * scale;
   const gap = 1e-8 * ((b[b.length - 1] as number) - (b[0] as number));
   const out: number[] = [];
   let lastSign = 0;

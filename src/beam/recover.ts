@@ -47,12 +47,12 @@ export function recoverDiagrams(model: BeamModel, result: StiffnessResult): Diag
   for (let e = 0; e + 1 < model.joints; e++) {
     const first = model.joint[e] as number;
     const last = model.joint[e + 1] as number;
-    const ei = model.ei[e] as number;
     state[0] = q[4 * e] as number;
     state[1] = -(q[4 * e + 1] as number);
     state[2] = d[2 * e + 1] as number;
     state[3] = d[2 * e] as number;
     for (let i = first; i < last; i++) {
+      const ei = model.ei[i] as number;
       const v = state[0];
       const m = state[1];
       const r = state[2];

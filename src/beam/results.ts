@@ -1,4 +1,6 @@
 import { restrainsDeflection, type Support } from "../supports/index.js";
+import { SAME_POINT } from "./validate.js";
+import { FLEXIBILITY_STRIDE } from "./flexibility.js";
 import type { BeamModel } from "./model.js";
 import type { Scratch } from "./scratch.js";
 import type { StiffnessResult } from "./stiffness.js";
@@ -18,7 +20,7 @@ export function spansOf(length: number, supports: readonly Support[]): BeamSpan[
   const out: BeamSpan[] = [];
   const first = at[0] as number;
   const last = at[at.length - 1] as number;
-  const tiny = 1e-10 * length;
+  const tiny = SAME_POINT * length;
   if (first > tiny) out.push(Object.freeze({ from: 0, to: first, kind: "cantilever" }));
   for (let i = 1; i < at.length; i++) out.push(Object.freeze({ from: at[i - 1] as number, to: at[i] as number, kind: "span" }));
   if (last < length - tiny) out.push(Object.freeze({ from: last, to: length, kind: "cantilever" }));
@@ -41,9 +43,17 @@ export function conditioningWarnings(model: BeamModel, supports: readonly Suppor
     for (const e of [node - 1, node]) {
       if (e < 0 || e >= last) continue;
       const h = (model.x[model.joint[e + 1] as number] as number) - (model.x[model.joint[e] as number] as number);
-      const ei = model.ei[e] as number;
-      kv += (12 * ei) / (h * h * h);
-      kr += (4 * ei) / h;
+      if (model.uniform[e] === 1) {
+        const ei = model.ei[model.joint[e] as number] as number;
+        kv += (12 * ei) / (h * h * h);
+        kr += (4 * ei) / h;
+      } else {
+        // the same diagonal terms from the element's flexibility [sV, sM, dV, dM, det]
+        const o = FLEXIBILITY_STRIDE * e;
+        const f = model.flexibility;
+        kv += (f[o + 1] as number) / (f[o + 4] as number);
+        kr += (h * (f[o] as number) - (f[o + 2] as number)) / (f[o + 4] as number);
+      }
     }
     for (const [value, member, field] of [
       [sup.stiffness, kv, "stiffness"],
@@ -76,9 +86,12 @@ export function conditioningWarnings(model: BeamModel, supports: readonly Suppor
 
 /**
  * A posteriori check of the solve: the out-of-balance force and moment at every node (what the
- * solution leaves unresolved, springs included) relative to the size of the loading. A large
- * value means float64 could not resolve the member (very soft parts next to very stiff short
- * elements) and the results carry that relative error.
+ * solution leaves unresolved, springs included) relative to the size of the loading (every load,
+ * reaction and spring force). A member that settlements move as a rigid body has a loading that
+ * is only rounding (below 1e-9 of the largest sum of terms at a node: each element end force is a
+ * fixed-end action plus stiffness times displacement, large and cancelling); there the scale is
+ * 1e-4 of that sum, so rounding alone never warns. The imbalance is the relative error
+ * of equilibrium; the error of other results (deflections) can be larger.
  */
 export function balanceWarnings(model: BeamModel, result: StiffnessResult, supports: readonly Support[], scratch: Scratch): BeamWarning[] {
   const n = model.joints;
@@ -86,8 +99,11 @@ export function balanceWarnings(model: BeamModel, result: StiffnessResult, suppo
   const d = result.displacements;
   const x = model.x;
   const length = (x[model.nodes - 1] as number) - (x[0] as number);
-  // the size of the loading: every load, wherever it acts
+  const sizes = result.endSizes;
+  // the size of the loading: every load, wherever it acts (reactions and springs added below),
+  // and the largest sum of terms at a node
   let scale = 0;
+  let terms = 0;
   for (let i = 0; i < model.nodes; i++) {
     scale += Math.abs(model.force[i] as number) + Math.abs(model.couple[i] as number) / length;
     if (i + 1 < model.nodes) scale += 0.5 * (Math.abs(model.wLeft[i] as number) + Math.abs(model.wRight[i] as number)) * ((x[i + 1] as number) - (x[i] as number));
@@ -113,6 +129,7 @@ export function balanceWarnings(model: BeamModel, result: StiffnessResult, suppo
       case "spring":
         if (sup.stiffness !== undefined) springV[node] = -sup.stiffness * ((d[2 * node] as number) + (sup.settlement ?? 0));
         if (sup.rotationalStiffness !== undefined) springR[node] = -sup.rotationalStiffness * ((d[2 * node + 1] as number) - (sup.rotation ?? 0));
+        terms = Math.max(terms, (sup.stiffness ?? 0) * (Math.abs(d[2 * node] as number) + Math.abs(sup.settlement ?? 0)), ((sup.rotationalStiffness ?? 0) * (Math.abs(d[2 * node + 1] as number) + Math.abs(sup.rotation ?? 0))) / length);
         break;
       default:
         return sup.kind satisfies never;
@@ -124,27 +141,45 @@ export function balanceWarnings(model: BeamModel, result: StiffnessResult, suppo
     const at = model.joint[i] as number;
     let f = model.force[at] as number;
     let m = -(model.couple[at] as number);
+    let fSize = Math.abs(f);
+    let mSize = Math.abs(m);
     if (i > 0) {
       f += q[4 * (i - 1) + 2] as number;
       m += q[4 * (i - 1) + 3] as number;
+      fSize += sizes[4 * (i - 1) + 2] as number;
+      mSize += sizes[4 * (i - 1) + 3] as number;
     }
     if (i < n - 1) {
       f += q[4 * i] as number;
       m += q[4 * i + 1] as number;
+      fSize += sizes[4 * i] as number;
+      mSize += sizes[4 * i + 1] as number;
     }
+    terms = Math.max(terms, fSize, mSize / length);
     if (rigid[2 * i] === 1) scale += Math.abs(f);
     else worstForce = Math.max(worstForce, Math.abs(f - (springV[i] as number)));
     if (rigid[2 * i + 1] === 1) scale += Math.abs(m) / length;
     else worstMoment = Math.max(worstMoment, Math.abs(m - (springR[i] as number)));
     scale += Math.abs(springV[i] as number) + Math.abs(springR[i] as number) / length;
   }
+  // nearly stress-free: the loading itself is rounding of the terms
+  if (scale < 1e-9 * terms) scale = STRESS_FREE * terms;
   const worst = Math.max(worstForce, worstMoment / length);
-  if (!(worst > 1e-10 * scale)) return [];
+  // forces of subnormal size are below anything rounding resolves
+  if (!(worst > BALANCE_WARNING * scale) || scale < 1e-280) return [];
+  const imbalance = worst / scale;
   return [
     Object.freeze({
       code: "ill-conditioned",
-      message: `Float64 could not balance every node to rounding: up to ${(worst / scale).toExponential(1)} of the load is out of balance, so results carry about that relative error. Very soft springs or parts next to short, stiff elements cause this.`,
-      imbalance: worst / scale,
+      message: `Float64 could not balance every node to rounding: up to ${imbalance.toExponential(1)} of the load is left out of balance, so the reactions and forces carry about that relative error, and deflections possibly more. Very soft springs, or short pieces between supports and hinges, cause this.`,
+      imbalance,
     }),
   ];
 }
+
+/** The scale of a nearly stress-free member: this fraction of the largest sum of terms at a node (see {@link balanceWarnings}). */
+const STRESS_FREE = 1e-4;
+/** An imbalance above this fraction of the loading is more than rounding: warn. */
+export const BALANCE_WARNING = 1e-10;
+/** An imbalance above this fraction means the solve failed: refuse (`ill-conditioned` error). */
+export const BALANCE_REFUSAL = 1e-6;

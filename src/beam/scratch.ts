@@ -11,10 +11,12 @@ export interface Scratch {
   /** Per piece: load intensity at each end. */
   wLeft: Float64Array;
   wRight: Float64Array;
-  /** Per element: E I, hinge release at the right end, the four fixed-end actions. */
+  /** Per piece: E I. Per element: hinge release at the right end, the four fixed-end actions, one E I or not, flexibility. */
   ei: Float64Array;
   released: Uint8Array;
   fixedEnd: Float64Array;
+  uniform: Uint8Array;
+  flexibility: Float64Array;
   /** Per breakpoint: applied force and couple; structural mark (1 node, 2 hinge); structural index. */
   force: Float64Array;
   couple: Float64Array;
@@ -29,8 +31,9 @@ export interface Scratch {
   rhs: Float64Array;
   prescribed: Uint8Array;
   value: Float64Array;
-  /** Per element: the four end forces. */
+  /** Per element: the four end forces, and the size of the terms each sums. */
   endForces: Float64Array;
+  endSizes: Float64Array;
   /** Per structural node, for the balance check: rigid restraint flags (two per node), spring force and moment. */
   rigid: Uint8Array;
   springV: Float64Array;
@@ -42,7 +45,7 @@ function fresh(): Scratch {
   const f = new Float64Array(0);
   const u = new Uint8Array(0);
   const i = new Int32Array(0);
-  return { raw: f, spare: f, wLeft: f, wRight: f, ei: f, released: u, fixedEnd: f, force: f, couple: f, mark: u, jointOf: i, joint: i, supportNode: i, band: f, rhs: f, prescribed: u, value: f, endForces: f, rigid: u, springV: f, springR: f };
+  return { raw: f, spare: f, wLeft: f, wRight: f, ei: f, released: u, fixedEnd: f, uniform: u, flexibility: f, force: f, couple: f, mark: u, jointOf: i, joint: i, supportNode: i, band: f, rhs: f, prescribed: u, value: f, endForces: f, endSizes: f, rigid: u, springV: f, springR: f };
 }
 
 const shared = fresh();
@@ -87,7 +90,10 @@ export function ensureNodes(s: Scratch, nodes: number, supports: number): void {
     s.wRight = new Float64Array(c);
     s.released = new Uint8Array(c);
     s.fixedEnd = new Float64Array(4 * c);
+    s.uniform = new Uint8Array(c);
+    s.flexibility = new Float64Array(5 * c);
     s.endForces = new Float64Array(4 * c);
+    s.endSizes = new Float64Array(4 * c);
   } else {
     for (let i = 0; i < elements; i++) s.wLeft[i] = s.wRight[i] = 0;
   }

@@ -1,14 +1,16 @@
-import { attempt, type Result } from "../errors/index.js";
-import { loadResultant } from "../loads/index.js";
+import { attempt, FlexuraError, issue, type Result } from "../errors/index.js";
 import { buildModel } from "./model.js";
 import { recoverDiagrams, recoverReactions } from "./recover.js";
 import { acquireScratch, releaseScratch } from "./scratch.js";
 import { peaksOf } from "./peaks.js";
-import { balanceWarnings, conditioningWarnings, spansOf } from "./results.js";
+import { BALANCE_REFUSAL, balanceWarnings, conditioningWarnings, spansOf } from "./results.js";
 import { checkStability } from "./stability.js";
 import { solveStiffness } from "./stiffness.js";
 import { refuseOverflow } from "./overflow.js";
-import type { BeamInput, BeamSolution, SolveOptions } from "./types.js";
+import { residualOf } from "./residual.js";
+import { refuseShortFreePieces } from "./conditioning.js";
+import { mergeNotes, narrowLoadsAsPoints } from "./coincidence.js";
+import type { BeamInput, BeamNote, BeamSolution, SolveOptions } from "./types.js";
 import { validateBeam } from "./validate.js";
 
 /**
@@ -48,23 +50,27 @@ import { validateBeam } from "./validate.js";
 export function solveBeam(beam: BeamInput, options?: SolveOptions): BeamSolution {
   validateBeam(beam, options);
   const axial = checkStability(beam.length, beam.supports, beam.hinges ?? []);
+  const notes: BeamNote[] = [];
+  const given = beam.loads ?? [];
+  const loads = narrowLoadsAsPoints(given, beam.length, notes);
+  const input = loads === given ? beam : { ...beam, loads };
   const scratch = acquireScratch();
   try {
-    const model = buildModel(beam, options, scratch);
-    const result = solveStiffness(model, beam.supports, scratch);
+    const model = buildModel(input, options, scratch);
+    if (model.merged) for (const note of mergeNotes(beam)) notes.push(note);
+    refuseShortFreePieces(model, beam.supports, beam.hinges ?? [], scratch.mark);
+    const result = solveStiffness(model, beam.supports, beam.hinges ?? [], scratch);
     const diagrams = recoverDiagrams(model, result);
     const reactions = recoverReactions(model, result, beam.supports);
-    const resultant = loadResultant(model.loads);
-    let force = -resultant.force;
-    let moment = resultant.moment;
-    for (const r of reactions) {
-      force += r.force;
-      moment += r.force * r.at + r.moment;
-    }
     const warnings = conditioningWarnings(model, beam.supports, result.pivotRatio);
-    for (const w of balanceWarnings(model, result, beam.supports, scratch)) warnings.push(w);
+    for (const w of balanceWarnings(model, result, beam.supports, scratch)) {
+      // an imbalance this far above rounding is a wrong answer, not a less accurate one: refuse it
+      if ((w["imbalance"] as number) > BALANCE_REFUSAL)
+        throw new FlexuraError([issue("ill-conditioned", ["supports"], `${w.message.split(". The results")[0]}: the results cannot be trusted, so none are given. Stiffen very soft springs, or move hinges and supports that are very close together apart or onto each other.`, { imbalance: w["imbalance"] })]);
+      warnings.push(w);
+    }
     for (const w of axial) warnings.push(w);
-    const residual = Object.freeze({ force, moment });
+    const residual = residualOf(model.loads, reactions);
     const { peaks, contraflexure } = peaksOf(diagrams);
     refuseOverflow(beam, options, { reactions, residual, peaks, diagrams: [diagrams.shear, diagrams.moment, diagrams.slope, diagrams.deflection] });
     return Object.freeze({
@@ -78,6 +84,7 @@ export function solveBeam(beam: BeamInput, options?: SolveOptions): BeamSolution
       contraflexure,
       residual,
       warnings: Object.freeze(warnings),
+      notes: Object.freeze(notes),
       spans: Object.freeze(spansOf(beam.length, beam.supports)),
     });
   } finally {

@@ -1,10 +1,12 @@
 import { FlexuraError, issue } from "../errors/index.js";
 import { restrainsAxis, restrainsDeflection, restrainsRotation, type Support } from "../supports/index.js";
 import type { BeamWarning } from "./types.js";
+import { SAME_POINT } from "./validate.js";
 
 /** A rigid-body motion of one part: deflection at its left end and rotation times its length. */
 type Motion = readonly [number, number];
 
+/** Two rigid-body motions are independent unless their dot product is below this fraction of their sizes (a property of 2-vectors, not a position). */
 const TOL = 1e-9;
 
 function mechanism(reason: string, path: readonly (string | number)[], message: string, details: Record<string, unknown>): never {
@@ -37,7 +39,7 @@ export function checkStability(length: number, supports: readonly Support[], hin
     );
   const order = hinges.length === 0 ? [] : hinges.map((at, index) => ({ at, index })).sort((a, b) => a.at - b.at);
   const sorted = inOrder(supports) ? supports : [...supports].sort((a, b) => a.at - b.at);
-  const close = 1e-10 * length;
+  const close = SAME_POINT * length;
   let allowed: Motion[] = [
     [1, 0],
     [0, 1],

@@ -109,6 +109,22 @@ export interface BeamWarning {
 }
 
 /**
+ * Something the solver did to the input under the tolerance policy (docs/tolerances.md), so
+ * that the result says what was solved: points closer than the coincidence tolerance merged,
+ * a distributed load too narrow to resolve applied as its resultant.
+ */
+export interface BeamNote {
+  /** Stable kebab-case code: `"points-merged"` or `"load-as-point"`. */
+  readonly code: string;
+  /** A plain-English sentence. */
+  readonly message: string;
+  /** Where it happened (length units). */
+  readonly at: number;
+  /** The input involved, as a path (`["hinges", 0]`, `["loads", 3]`). */
+  readonly path: readonly (string | number)[];
+}
+
+/**
  * The solved member: reactions, and shear, moment, slope and deflection as exact piecewise
  * polynomials of x, with their peaks.
  *
@@ -140,6 +156,8 @@ export interface BeamSolution {
   readonly residual: BeamResidual;
   /** Numerical warnings, for example `ill-conditioned`. Empty when all is well. */
   readonly warnings: readonly BeamWarning[];
+  /** What the tolerance policy changed in the input (merged points, narrow loads as points); empty when nothing. Frozen plain data. */
+  readonly notes: readonly BeamNote[];
   /** The spans and cantilevers between supports that hold deflection, left to right. */
   readonly spans: readonly BeamSpan[];
 }

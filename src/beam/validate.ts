@@ -4,8 +4,10 @@ import { validateSupports } from "../supports/index.js";
 import { restrainsRotation } from "../supports/index.js";
 import type { BeamInput, SolveOptions } from "./types.js";
 
-/** Positions closer than this (relative to the length) are the same point of the member. */
-export const SAME_POINT = 1e-10;
+import { COINCIDENCE } from "../math/tolerance.js";
+
+/** Positions closer than this (relative to the length) are the same point of the member: the coincidence tolerance of docs/tolerances.md. */
+export const SAME_POINT = COINCIDENCE;
 
 function validateStiffness(stiffness: unknown, length: number, found: IssueCollector): void {
   if (typeof stiffness === "number" || !Array.isArray(stiffness)) {

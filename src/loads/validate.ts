@@ -1,7 +1,12 @@
 import { describeValue, requireFinite, type IssueCollector } from "../errors/index.js";
 
-/** How far past an end of the member a position may sit and still count as on it (relative to the length). */
-export const POSITION_TOLERANCE = 1e-12;
+import { COINCIDENCE } from "../math/tolerance.js";
+
+/**
+ * How far past an end of the member a position may sit and still count as on it (relative to the
+ * length): the coincidence tolerance of docs/tolerances.md, {@link COINCIDENCE}.
+ */
+export const POSITION_TOLERANCE = COINCIDENCE;
 
 function inside(x: number, length: number): boolean {
   const slack = POSITION_TOLERANCE * length;

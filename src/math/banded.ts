@@ -10,6 +10,8 @@ export interface BandedFactorReport {
   readonly singularAt: number;
   /** The smallest ratio of pivot to original diagonal entry (1 for a diagonal matrix; near 0 when ill-conditioned). */
   readonly smallestPivotRatio: number;
+  /** Index of the pivot with that smallest ratio (the singular one when the factorisation stopped; 0 for a diagonal matrix). */
+  readonly smallestPivotAt: number;
 }
 
 /**
@@ -26,7 +28,7 @@ export interface BandedFactorReport {
  * @example
  * ```ts
  * const band = Float64Array.of(4, 2, 3, 0); // [[4, 2], [2, 3]], w = 1
- * factorBandedSymmetric(band, 2, 1); // { singularAt: -1, smallestPivotRatio: 0.666... }
+ * factorBandedSymmetric(band, 2, 1); // { singularAt: -1, smallestPivotRatio: 0.666..., smallestPivotAt: 1 }
  * ```
  */
 export function factorBandedSymmetric(band: Float64Array, n: number, w: number, tolerance = 1e-12): BandedFactorReport {
@@ -34,13 +36,17 @@ export function factorBandedSymmetric(band: Float64Array, n: number, w: number, 
   if (diagonal.length < n) diagonal = new Float64Array(Math.max(n, 2 * diagonal.length));
   for (let i = 0; i < n; i++) diagonal[i] = band[i * s] as number;
   let smallest = 1;
+  let at = 0;
   for (let i = 0; i < n; i++) {
     const row = i * s;
     const pivot = band[row] as number;
     const original = diagonal[i] as number;
     const ratio = original > 0 ? pivot / original : 0;
-    if (!(ratio > tolerance)) return { singularAt: i, smallestPivotRatio: Math.min(smallest, ratio > 0 ? ratio : 0) };
-    if (ratio < smallest) smallest = ratio;
+    if (!(ratio > tolerance)) return { singularAt: i, smallestPivotRatio: Math.min(smallest, ratio > 0 ? ratio : 0), smallestPivotAt: i };
+    if (ratio < smallest) {
+      smallest = ratio;
+      at = i;
+    }
     const last = Math.min(n - 1, i + w);
     for (let j = i + 1; j <= last; j++) {
       const aij = band[row + j - i] as number;
@@ -51,7 +57,7 @@ export function factorBandedSymmetric(band: Float64Array, n: number, w: number, 
       band[row + j - i] = l;
     }
   }
-  return { singularAt: -1, smallestPivotRatio: smallest };
+  return { singularAt: -1, smallestPivotRatio: smallest, smallestPivotAt: at };
 }
 
 /** Scratch copy of the original diagonal (grown as needed; the factorisation is synchronous). */

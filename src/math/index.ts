@@ -4,5 +4,6 @@ export { scalePiecewise, addPiecewise, derivativeOf, integralOf } from "./piecew
 export type { LocatedValue, Extremes } from "./piecewise-extremes.js";
 export { extremesOf, rootsOf } from "./piecewise-extremes.js";
 export { evaluatePolynomial, polynomialRootsIn } from "./polynomial-api.js";
+export { COINCIDENCE, ROUNDING, coincidenceTolerance } from "./tolerance.js";
 export type { BandedFactorReport } from "./banded.js";
 export { factorBandedSymmetric, solveBandedSymmetric } from "./banded.js";

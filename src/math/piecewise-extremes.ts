@@ -1,3 +1,4 @@
+import { ROUNDING } from "./tolerance.js";
 import { fail } from "../errors/index.js";
 import { checkNumber, checkPiecewise, overflow } from "./checks.js";
 import type { PiecewisePolynomial } from "./piecewise.js";
@@ -43,7 +44,8 @@ const derivative = new Float64Array(16);
 /**
  * The largest and smallest values on `[lo, hi]` (default: the whole domain), found exactly:
  * candidates are each piece's ends (so both one-sided limits at a jump count) and the real roots
- * of each piece's derivative. Ties keep the leftmost location.
+ * of each piece's derivative. Ties keep the leftmost location. A value within rounding of zero
+ * (1e-10 of the larger of the two magnitudes; docs/tolerances.md) is reported as 0.
  *
  * @throws FlexuraError `outside-domain` when the interval is not within the domain (or an end is NaN);
  *   `interval-reversed` when `hi < lo`; `not-a-number` (lo, hi); `piecewise-invalid` (pp);
@@ -115,7 +117,9 @@ export function extremesOf(pp: PiecewisePolynomial, lo?: number, hi?: number): E
     }
   }
   if (takeRootOverflow() || maxV - maxV !== 0 || minV - minV !== 0) overflow(["pp"], "A value of the polynomial");
-  return { max: { value: maxV, at: maxX }, min: { value: minV, at: minX } };
+  // a value within rounding of zero (ROUNDING of the largest magnitude) is zero: the tolerance policy of docs/tolerances.md
+  const floor = ROUNDING * Math.max(Math.abs(maxV), Math.abs(minV));
+  return { max: { value: Math.abs(maxV) <= floor ? 0 : maxV, at: maxX }, min: { value: Math.abs(minV) <= floor ? 0 : minV, at: minX } };
 }
 
 /**

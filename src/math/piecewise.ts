@@ -1,6 +1,7 @@
 import { describeValue, fail, IssueCollector } from "../errors/index.js";
 import { checkBreaks, checkCoefficients, checkNumber, checkPiecewise, checkPoints, checkSide, isNumberList, MAX_DEGREE, overflow, trusted } from "./checks.js";
 import { evaluatePolynomial } from "./polynomial.js";
+import { coincidenceTolerance } from "./tolerance.js";
 
 /**
  * A piecewise polynomial on typed arrays: piece `i` covers `[breaks[i], breaks[i+1]]` and equals
@@ -118,10 +119,15 @@ function locate(b: Float64Array, x: number, side: PiecewiseSide): number {
 
 /**
  * Value at `x`. At a breakpoint where the function jumps, `side` chooses the limit from the
- * left or from the right (default `"right"`; at the last breakpoint the right limit does not
- * exist and the left one is returned).
+ * left or from the right. Without a side, the right limit is taken, except at the last
+ * breakpoint, where the value is the left limit (the value on the domain at each end).
  *
- * @throws FlexuraError `outside-domain` when `x` is NaN or outside `[breaks[0], breaks[last]]`;
+ * At the ends, a side that points off the domain (`"left"` at the first breakpoint, `"right"`
+ * at the last) gives 0: a diagram is zero off its member, so the jump at an end is the end's
+ * reaction. A position within the coincidence tolerance (1e-9 of the domain's width, see
+ * docs/tolerances.md) of an end is at that end: x = 0.1 + 0.2 on [0, 0.3] reads x = 0.3.
+ *
+ * @throws FlexuraError `outside-domain` when `x` is NaN or outside `[breaks[0], breaks[last]]` by more than the tolerance;
  *   `not-a-number` (x), `unknown-side` (side), `piecewise-invalid` (pp);
  *   `piecewise-overflow` when the value exceeds what a double can hold.
  * @example
@@ -131,14 +137,23 @@ function locate(b: Float64Array, x: number, side: PiecewiseSide): number {
  * evaluatePiecewise(step, 1); // 3
  * ```
  */
-export function evaluatePiecewise(pp: PiecewisePolynomial, x: number, side: PiecewiseSide = "right"): number {
+export function evaluatePiecewise(pp: PiecewisePolynomial, x: number, side?: PiecewiseSide): number {
   const q = checkPiecewise(pp, "pp");
-  if (side !== "right" && side !== "left") checkSide(side);
+  if (side !== undefined && side !== "right" && side !== "left") checkSide(side);
   if (typeof x !== "number") checkNumber(x, "x");
   const b = q.breaks;
-  if (!(x >= (b[0] as number) && x <= (b[b.length - 1] as number)))
-    fail("outside-domain", ["x"], `x = ${x} lies outside [${b[0]}, ${b[b.length - 1]}].`, { x });
-  const i = locate(b, x, side);
+  const x0 = b[0] as number;
+  const x1 = b[b.length - 1] as number;
+  const slack = coincidenceTolerance(x1 - x0);
+  if (!(x >= x0 - slack && x <= x1 + slack)) fail("outside-domain", ["x"], `x = ${x} lies outside [${x0}, ${x1}].`, { x });
+  if (x <= x0) {
+    if (side === "left") return 0;
+    x = x0;
+  } else if (x >= x1) {
+    if (side === "right") return 0;
+    x = x1;
+  }
+  const i = locate(b, x, side ?? "right");
   const d = q.degree;
   const v = evaluatePolynomial(q.coefficients, i * (d + 1), d, x - (b[i] as number));
   if (v - v !== 0) overflow(["x"], `The value at x = ${x}`);
@@ -148,7 +163,8 @@ export function evaluatePiecewise(pp: PiecewisePolynomial, x: number, side: Piec
 /**
  * Values at many points into `out` (allocated when not given). Points may come in any order,
  * but sorted points are fastest: the piece search then walks forward. At a breakpoint the
- * right-hand limit is taken (the left-hand one at the last breakpoint).
+ * right-hand limit is taken (the left-hand one at the last breakpoint); a point within the
+ * coincidence tolerance (1e-9 of the domain's width) of an end is at that end.
  *
  * @throws FlexuraError `outside-domain` when a point lies outside the domain or is NaN;
  *   `not-an-array` / `not-a-number` (xs), `output-invalid` (out not a Float64Array as long as xs),
@@ -173,11 +189,18 @@ export function evaluatePiecewiseMany(pp: PiecewisePolynomial, xs: ArrayLike<num
   const last = b.length - 2;
   const x0 = b[0] as number;
   const x1 = b[last + 1] as number;
+  const slack = coincidenceTolerance(x1 - x0);
   let i = 0;
   for (let j = 0; j < n; ) {
     // place the cursor on the piece of xs[j]: forward by steps for sorted points, by binary search when a point goes back
     const first = xs[j] as number;
-    if (!(first >= x0 && first <= x1)) fail("outside-domain", ["xs", j], `x = ${first} lies outside [${x0}, ${x1}].`, { x: first });
+    if (!(first >= x0 && first <= x1)) {
+      // within the coincidence tolerance of an end: at the end
+      if (!(first >= x0 - slack && first <= x1 + slack)) fail("outside-domain", ["xs", j], `x = ${first} lies outside [${x0}, ${x1}].`, { x: first });
+      result[j] = evaluatePolynomial(c, first < x0 ? 0 : last * stride, d, first < x0 ? 0 : x1 - (b[last] as number));
+      j++;
+      continue;
+    }
     if (first < (b[i] as number)) i = locate(b, first, "right");
     while (i < last && first >= (b[i + 1] as number)) i++;
     // then evaluate the run of points that stay on this piece, its coefficients held in locals

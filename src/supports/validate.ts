@@ -1,7 +1,9 @@
 import { describeValue, requireFinite, type IssueCollector } from "../errors/index.js";
 
-/** How far past an end of the member a support may sit and still count as on it (relative to the length). */
-const POSITION_TOLERANCE = 1e-12;
+import { COINCIDENCE } from "../math/tolerance.js";
+
+/** How far past an end of the member a support may sit and still count as on it, and how close two supports may be (relative to the length). */
+const POSITION_TOLERANCE = COINCIDENCE;
 
 const KINDS = new Set(["pin", "roller", "fixed", "guided", "spring"]);
 
@@ -87,13 +89,13 @@ export function validateSupports(supports: unknown, length: number, found: Issue
   }
   // duplicates: sort by position (already so when the input is in order), compare neighbours
   if (!inOrder) seen.sort((a, b) => a.at - b.at || a.index - b.index);
-  const close = 1e-10 * (checkPositions ? length : 1);
+  const close = POSITION_TOLERANCE * (checkPositions ? length : 1);
   for (let k = 1; k < seen.length; k++) {
     const a = seen[k - 1] as { at: number; index: number };
     const b = seen[k] as { at: number; index: number };
     if (Math.abs(b.at - a.at) <= close) {
       const [first, second] = a.index < b.index ? [a, b] : [b, a];
-      found.add("support-duplicate", ["supports", second.index, "at"], `Supports ${first.index} and ${second.index} are both at x = ${second.at}; combine them into one support.`, {
+      found.add("support-duplicate", ["supports", second.index, "at"], `Supports ${first.index} and ${second.index} are at the same point, x = ${second.at} (closer than ${POSITION_TOLERANCE} of the length, the coincidence tolerance); combine them into one support.`, {
         at: second.at,
         other: first.index,
       });

@@ -14,6 +14,6 @@ export function deflectionAt(s: BeamSolution, x: number): number {
 }
 
 /** Moment at x (sagging positive). */
-export function momentAt(s: BeamSolution, x: number, side: "left" | "right" = "right"): number {
+export function momentAt(s: BeamSolution, x: number, side?: "left" | "right"): number {
   return evaluatePiecewise(s.moment, x, side);
 }

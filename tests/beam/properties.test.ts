@@ -66,7 +66,8 @@ describe("solveBeam laws on random stable members", () => {
     const mScale = size(s.moment, xs) + scale.moment;
     beam.supports.forEach((sup: Support, i) => {
       const y = evaluatePiecewise(s.deflection, sup.at);
-      const t = evaluatePiecewise(s.slope, sup.at, "right");
+      // the right-hand limit (the value on the member at the right end)
+      const t = evaluatePiecewise(s.slope, sup.at);
       const r = s.reactions[i]!;
       switch (sup.kind) {
         case "pin":

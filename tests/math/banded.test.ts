@@ -11,7 +11,7 @@ describe("factorBandedSymmetric and solveBandedSymmetric", () => {
 
   it("reports the first vanishing pivot of a singular matrix", () => {
     const band = Float64Array.of(1, -1, 1, 0); // [[1, -1], [-1, 1]]
-    expect(factorBandedSymmetric(band, 2, 1)).toEqual({ singularAt: 1, smallestPivotRatio: 0 });
+    expect(factorBandedSymmetric(band, 2, 1)).toEqual({ singularAt: 1, smallestPivotRatio: 0, smallestPivotAt: 1 });
   });
 
   test.prop([fc.integer({ min: 1, max: 30 }), fc.integer({ min: 0, max: 4 }), fc.array(fc.double({ min: -1, max: 1, noNaN: true }), { minLength: 200, maxLength: 200 })])(

@@ -38,7 +38,10 @@ describe("piecewisePolynomial", () => {
     expect(evaluatePiecewise(step, 1, "right")).toBe(3);
     expect(evaluatePiecewise(step, 1)).toBe(3);
     expect(evaluatePiecewise(step, 2)).toBe(3);
-    expect(evaluatePiecewise(step, 0, "left")).toBe(1);
+    // a side pointing off the domain at an end: the function is zero off its domain
+    expect(evaluatePiecewise(step, 0, "left")).toBe(0);
+    expect(evaluatePiecewise(step, 2, "right")).toBe(0);
+    expect(evaluatePiecewise(step, 0)).toBe(1);
     expect(findPiece(step, 2, "right")).toBe(1);
     expect(pieceCount(step)).toBe(2);
   });
