@@ -1,6 +1,6 @@
 import { bench, suite } from "./harness.js";
 import { solveBeam, type BeamInput } from "../src/beam/index.js";
-import { checkSteelBeam, type IShapeForDesign } from "../src/design/index.js";
+import { bucklingResistance, checkSteelBeam, criticalMoment, eurocodeResistance, type IShapeForDesign, type IShapeForEurocode } from "../src/design/index.js";
 
 // An invented floor beam (kip, in, ksi): a 30 ft simple span braced at its third
 // points (three unbraced segments) under one factored combination, uniform plus two point loads.
@@ -32,7 +32,31 @@ const input: BeamInput = {
 const solution = solveBeam(input);
 const options = { method: "lrfd", braces: [120, 240] } as const;
 
+// An IPE 300-like section in S235 (N, mm), three 2 m segments of a 6 m member.
+const ipe: IShapeForEurocode = {
+  rolled: true,
+  depth: 300,
+  flangeWidth: 150,
+  flangeThickness: 10.7,
+  webThickness: 7.1,
+  rootRadius: 15,
+  area: 5381,
+  elasticModulus: 557.1e3,
+  plasticModulus: 628.4e3,
+  minorMomentOfInertia: 603.8e4,
+  torsionConstant: 20.12e4,
+  warpingConstant: 125.9e9,
+};
+const s235 = { elasticModulus: 210_000, shearModulus: 81_000, yieldStrength: 235 };
+function eurocodeThreeSegments(): number {
+  let least = Infinity;
+  const section = eurocodeResistance(ipe, s235);
+  for (const c1 of [1.13, 1.0, 1.13]) least = Math.min(least, bucklingResistance(ipe, s235, criticalMoment(ipe, s235, 2000, { momentShapeFactor: c1 }), "rolled").resistance, section.bending);
+  return least;
+}
+
 suite("design", () => {
   bench("design: solveBeam alone (the member checked below)", () => solveBeam(input));
   bench("design: checkSteelBeam AISC 360-16, three segments, LRFD (beyond the solve)", () => checkSteelBeam(solution, shape, steel, options));
+  bench("design: EN 1993-1-1 section resistance and three segments' M_b,Rd (6.3.2.3)", () => eurocodeThreeSegments());
 });
