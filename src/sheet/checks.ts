@@ -2,7 +2,7 @@ import type { ModelAnalysis } from "../model/index.js";
 import { cellWord, isBlank, isSheetError, rangeRows, sheetError, shown, cellQuantity, type CellValue, type SheetError, type SheetValue } from "./cells.js";
 import { memberModelJson, type ModelJson } from "./member.js";
 import { sectionJson } from "./section.js";
-import { analyseCached } from "./solve.js";
+import { analyseCached, cachedByCells } from "./solve.js";
 
 /** The limits a sheet may give, by their model names (read in any case, spaces ignored). */
 const LIMIT_NAMES = ["deflection", "bendingStress", "shearStress"] as const;
@@ -33,6 +33,10 @@ const UNCHECKED = new Set(["stress-limit-without-section", "part-bending-stress-
 
 /** The member with its section (blank shape: none) and limits, analysed; an error when a limit could not be checked. */
 function checked(limits: unknown, shape: unknown, dimensions: unknown, member: readonly unknown[]): ModelAnalysis | SheetError {
+  return cachedByCells("checks", [limits, shape, dimensions, ...member], () => readChecked(limits, shape, dimensions, member));
+}
+
+function readChecked(limits: unknown, shape: unknown, dimensions: unknown, member: readonly unknown[]): ModelAnalysis | SheetError {
   const limitJson = limitsJson(limits);
   if (isSheetError(limitJson)) return limitJson;
   const json = memberModelJson(member[0], member[1], member[2], member[3], member[4], member[5]);

@@ -1,7 +1,7 @@
 import { evaluateDiagram, type ModelAnalysis } from "../model/index.js";
 import { cellQuantity, isBlank, isSheetError, sheetError, shown, type CellValue, type SheetValue } from "./cells.js";
 import { memberModelJson } from "./member.js";
-import { analyseCached, analysisJson } from "./solve.js";
+import { analyseCached, analysisJson, cachedByCells } from "./solve.js";
 
 /**
  * A member as a sheet gives it, the arguments every member function takes last: length (length unit), E
@@ -11,8 +11,10 @@ import { analyseCached, analysisJson } from "./solve.js";
 export type SheetMemberArgs = readonly [length: unknown, E: unknown, I: unknown, supports: unknown, loads: unknown, units?: unknown];
 
 function analysed(args: SheetMemberArgs): ModelAnalysis | SheetValue {
-  const json = memberModelJson(args[0], args[1], args[2], args[3], args[4], args[5]);
-  return isSheetError(json) ? json : analyseCached(json);
+  return cachedByCells("member", args, () => {
+    const json = memberModelJson(args[0], args[1], args[2], args[3], args[4], args[5]);
+    return isSheetError(json) ? json : analyseCached(json);
+  });
 }
 
 const isAnalysis = (v: ModelAnalysis | SheetValue): v is ModelAnalysis => typeof v === "object" && v !== null && !Array.isArray(v) && !isSheetError(v);
@@ -108,14 +110,16 @@ function pathParts(path: string): (string | number)[] | undefined {
  */
 export function sheetModelResult(json: unknown, path: unknown): SheetValue {
   if (typeof json !== "string" || isBlank(json)) return sheetError("sheet-model-missing", "model: give the model file's JSON text.");
-  let parsed: unknown;
-  try {
-    parsed = JSON.parse(json);
-  } catch (e) {
-    return sheetError("sheet-model-not-json", `model: not valid JSON (${e instanceof Error ? e.message : String(e)}).`);
-  }
-  if (typeof parsed !== "object" || parsed === null || Array.isArray(parsed)) return sheetError("sheet-model-not-json", "model: the JSON must be one object, a model file.");
-  const a = analyseCached(parsed as Record<string, unknown>);
+  const a = cachedByCells("model", [json], () => {
+    let parsed: unknown;
+    try {
+      parsed = JSON.parse(json);
+    } catch (e) {
+      return sheetError("sheet-model-not-json", `model: not valid JSON (${e instanceof Error ? e.message : String(e)}).`);
+    }
+    if (typeof parsed !== "object" || parsed === null || Array.isArray(parsed)) return sheetError("sheet-model-not-json", "model: the JSON must be one object, a model file.");
+    return analyseCached(parsed as Record<string, unknown>);
+  });
   if (!isAnalysis(a)) return a;
   const parts = typeof path === "string" ? pathParts(path) : undefined;
   if (parts === undefined) return sheetError("sheet-path-invalid", `path: "${shown(path)}" is not a path such as moment.max.value or reactions[0].force.`);

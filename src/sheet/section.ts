@@ -4,7 +4,7 @@ import { attempt } from "../errors/index.js";
 import { tryParseQuantity, type QuantityKind } from "../units/index.js";
 import { cellQuantity, cellWord, isBlank, isSheetError, rangeRows, sheetError, shown, type CellValue, type SheetError, type SheetValue } from "./cells.js";
 import { SHEET_UNIT_SYSTEMS, type ModelJson } from "./member.js";
-import { analyseCached, cellMessage } from "./solve.js";
+import { analyseCached, cachedByCells, cellMessage } from "./solve.js";
 
 /** Every name a section field has in the model format (for reading a dimension's name in any case). */
 let fieldNames: ReadonlyMap<string, string> | undefined;
@@ -55,6 +55,10 @@ export function sectionJson(shape: unknown, dimensions: unknown): ModelJson | Sh
 
 /** The section analysed on its own (a unit-length fixed stub carries it), so the model reader reads its units and checks it. */
 function sectionAnalysis(shape: unknown, dimensions: unknown, units: unknown): ModelAnalysis | SheetError {
+  return cachedByCells("section", [shape, dimensions, units], () => readSection(shape, dimensions, units));
+}
+
+function readSection(shape: unknown, dimensions: unknown, units: unknown): ModelAnalysis | SheetError {
   const system = isBlank(units) ? undefined : SHEET_UNIT_SYSTEMS.find((s) => s.toLowerCase() === String(units).trim().toLowerCase());
   if (!isBlank(units) && system === undefined) return sheetError("sheet-unknown-units", `units: "${shown(units)}" is not a unit set; use one of ${SHEET_UNIT_SYSTEMS.join(", ")}.`);
   const section = sectionJson(shape, dimensions);

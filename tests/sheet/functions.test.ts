@@ -15,6 +15,7 @@ import {
   sheetSolveCount,
   sheetStations,
   SHEET_CACHE_SIZE,
+  cellsKey,
   type SheetValue,
 } from "../../src/sheet/index.js";
 
@@ -92,6 +93,26 @@ describe("sheet functions", () => {
     const mid = sheetSolveCount();
     sheetMoment(2, ...member); // pushed out of the cache by the others: solved again
     expect(sheetSolveCount() - mid).toBe(1);
+  });
+});
+
+describe("the cache by cells", () => {
+  test("cellsKey tells apart what the readers tell apart, and refuses what it cannot key", () => {
+    const keys = [6, "6", " 6", null, undefined, Number.NaN, Infinity, -Infinity, 0, -0, true, "true", [], [null], [[6]], ["a,b"], ["a", "b"]].map(cellsKey);
+    expect(new Set(keys).size).toBe(keys.length);
+    expect(cellsKey([{}])).toBeUndefined();
+    expect(cellsKey([Symbol.iterator])).toBeUndefined();
+  });
+  test("a warm cache never answers for other cells: NaN where a blank was is an error, not the blank's number", () => {
+    clearSheetCache();
+    const uniform = [["distributed", null, null, 12, null]];
+    expect(typeof sheetMoment(3, 6, "200 GPa", "80e6 mm^4", supports, uniform)).toBe("number");
+    expect(isSheetError(sheetMoment(3, 6, "200 GPa", "80e6 mm^4", supports, [["distributed", null, null, 12, Number.NaN]]))).toBe(true);
+    expect(isSheetError(sheetMoment(3, 6, "200 GPa", "80e6 mm^4", supports, [["distributed", null, null, 12, "x"]]))).toBe(true);
+    // The same member as other cells (6 as text) reads to the same model: solved once.
+    const before = sheetSolveCount();
+    sheetMoment(3, "6", "200 GPa", "80e6 mm^4", supports, uniform);
+    expect(sheetSolveCount() - before).toBe(0);
   });
 });
 
