@@ -5,7 +5,7 @@ export { commonDeflectionRatios } from "./limits.js";
 export type { MemberSection, MemberSectionPart, MemberSectionProperties, SectionStretch, MemberSections } from "./sections.js";
 export { memberSection } from "./sections.js";
 export type { CheckedSolution } from "./solution.js";
-export type { PeakBendingStress, PartPeakStresses, PeakShearStress, MemberStresses } from "./peaks.js";
+export type { PeakBendingStress, PartPeakStresses, PeakShearStress, MaterialPeakShearStress, PartPeakShearStress, MemberStresses } from "./peaks.js";
 export { memberStresses, tryMemberStresses } from "./peaks.js";
 export type { SpanDeflection } from "./deflection.js";
 export { spanDeflections } from "./deflection.js";

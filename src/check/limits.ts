@@ -72,8 +72,18 @@ export interface MemberLimits {
    * missing entry: that part is not checked); needs sections given with their `parts`.
    */
   readonly bendingStressByPart?: readonly (AllowableBendingStress | null)[];
-  /** Allowable shear stress (force / length^2, > 0). */
+  /**
+   * Allowable shear stress (force / length^2, > 0). For a section of several materials it is
+   * checked against the largest of the materials' own stresses; to check each material against
+   * its own allowable, give `shearStressByPart`.
+   */
   readonly shearStress?: number;
+  /**
+   * Allowable shear stress in each solid part of a multi-material section, by part index (null
+   * or a missing entry: that part is not checked): each part's own peak n_i |V| Q* / (I* b*) over
+   * its heights is checked against it. Needs sections from the section module (memberSection).
+   */
+  readonly shearStressByPart?: readonly (number | null)[];
   /** Deflection limits; each gives one check per span and cantilever. */
   readonly deflection?: DeflectionLimit | readonly DeflectionLimit[];
 }
@@ -131,7 +141,7 @@ function checkDeflectionLimit(found: IssueCollector, d: unknown, p: IssuePath): 
   }
 }
 
-const LIMIT_FIELDS = ["bendingStress", "bendingStressByPart", "shearStress", "deflection"] as const;
+const LIMIT_FIELDS = ["bendingStress", "bendingStressByPart", "shearStress", "shearStressByPart", "deflection"] as const;
 
 /**
  * Validates the limits, recording every issue, and returns a copy of them made of their own
@@ -159,6 +169,15 @@ export function checkLimits(found: IssueCollector, limits: unknown, path: IssueP
   }
   const shearGiven = own(limits, "shearStress");
   const shearStress = shearGiven === undefined ? undefined : checkPositive(found, shearGiven, [...path, "shearStress"], "allowable shear stress") ? (shearGiven as number) : undefined;
+  const shearByPartGiven = own(limits, "shearStressByPart");
+  let shearStressByPart: (number | null)[] | undefined;
+  if (Array.isArray(shearByPartGiven)) {
+    shearStressByPart = shearByPartGiven.map((b: unknown, i) =>
+      b === null || b === undefined ? null : checkPositive(found, b, [...path, "shearStressByPart", i], "allowable shear stress") ? (b as number) : null,
+    );
+  } else if (shearByPartGiven !== undefined) {
+    found.add("not-a-list", [...path, "shearStressByPart"], `shearStressByPart must be a list with one allowable (or null) per part; got ${describeValue(shearByPartGiven)}.`);
+  }
   const deflectionGiven = own(limits, "deflection");
   let deflection: DeflectionLimit[] | undefined;
   if (Array.isArray(deflectionGiven)) {
@@ -175,14 +194,16 @@ export function checkLimits(found: IssueCollector, limits: unknown, path: IssueP
     own(limits, "bendingStress") !== undefined ||
     (Array.isArray(byPartGiven) ? byPartGiven.some((b) => b !== null && b !== undefined) : byPartGiven !== undefined) ||
     shearGiven !== undefined ||
+    (Array.isArray(shearByPartGiven) ? shearByPartGiven.some((b) => b !== null && b !== undefined) : shearByPartGiven !== undefined) ||
     (Array.isArray(deflectionGiven) ? deflectionGiven.length > 0 : deflectionGiven !== undefined);
   if (!requested) {
-    found.add("limits-empty", path, "Give at least one limit (bendingStress, bendingStressByPart, shearStress or deflection): with none, nothing would be checked and nothing could pass.");
+    found.add("limits-empty", path, "Give at least one limit (bendingStress, bendingStressByPart, shearStress, shearStressByPart or deflection): with none, nothing would be checked and nothing could pass.");
   }
   return {
     ...(bendingStress === undefined || bendingStress === null ? {} : { bendingStress }),
     ...(bendingStressByPart === undefined ? {} : { bendingStressByPart }),
     ...(shearStress === undefined ? {} : { shearStress }),
+    ...(shearStressByPart === undefined ? {} : { shearStressByPart }),
     ...(deflection === undefined ? {} : { deflection }),
   };
 }

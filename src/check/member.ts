@@ -35,7 +35,8 @@ function deflectionCheck(limit: DeflectionLimit, d: SpanDeflection, index: numbe
 
 /**
  * Checks a solved member against the limits the engineer supplies: bending stress (tension
- * and compression, anywhere on the member, see `memberStresses`), shear stress, and deflection
+ * and compression, anywhere on the member, see `memberStresses`), shear stress (for several
+ * materials each part against its own allowable, `shearStressByPart`), and deflection
  * per span and cantilever (span / n, or an absolute limit; see {@link commonDeflectionRatios}).
  * Each check reports demand, capacity, utilisation = demand / capacity, pass (utilisation <= 1),
  * where it governs and the formula used; the governing check is the one with the highest
@@ -59,9 +60,13 @@ function deflectionCheck(limit: DeflectionLimit, d: SpanDeflection, index: numbe
  */
 export function checkMember(solution: CheckedSolution, sections: MemberSections, limits: MemberLimits): MemberCheck {
   const found = new IssueCollector();
-  const stretches = resolveSections(found, sections, solution.length, ["sections"]);
-  const given = checkLimits(found, limits, ["limits"]);
-  if (given?.shearStress !== undefined && found.empty) {
+  // the limits first (they say whether shear is needed), their issues listed after the sections'
+  const limitIssues = new IssueCollector();
+  const given = checkLimits(limitIssues, limits, ["limits"]);
+  const needShear = given?.shearStress !== undefined || (given?.shearStressByPart ?? []).some((b) => b !== null);
+  const stretches = resolveSections(found, sections, solution.length, ["sections"], needShear);
+  found.addAll(limitIssues.issues);
+  if (needShear && found.empty) {
     stretches.forEach((s, i) => {
       if (s.unitShear === null) {
         const path = Array.isArray(sections) ? ["sections", i, "shear"] : ["sections", "shear"];
@@ -74,9 +79,10 @@ export function checkMember(solution: CheckedSolution, sections: MemberSections,
   const stresses = stressesOf(solution, stretches);
   const deflections = spanDeflections(solution);
   const checks: CheckResult[] = [];
-  const bending = (t: PeakBendingStress, c: PeakBendingStress, allow: { tension: number; compression: number }, suffix: string, path: IssuePath): void => {
-    checks.push(checkResultAt(path, "bending-tension", `bending stress, tension${suffix}`, t.stress, allow.tension, { x: t.x, fibre: t.fibre, y: t.y, stretch: t.stretch }, bendingFormula(t, "t")));
-    checks.push(checkResultAt(path, "bending-compression", `bending stress, compression${suffix}`, -c.stress + 0, allow.compression, { x: c.x, fibre: c.fibre, y: c.y, stretch: c.stretch }, bendingFormula(c, "c")));
+  const bending = (t: PeakBendingStress, c: PeakBendingStress, allow: { tension: number; compression: number }, suffix: string, path: IssuePath, part?: number): void => {
+    const inPart = part === undefined ? {} : { part };
+    checks.push(checkResultAt(path, "bending-tension", `bending stress, tension${suffix}`, t.stress, allow.tension, { x: t.x, fibre: t.fibre, y: t.y, stretch: t.stretch, ...inPart }, bendingFormula(t, "t")));
+    checks.push(checkResultAt(path, "bending-compression", `bending stress, compression${suffix}`, -c.stress + 0, allow.compression, { x: c.x, fibre: c.fibre, y: c.y, stretch: c.stretch, ...inPart }, bendingFormula(c, "c")));
   };
   const allow = bendingAllowables(sound.bendingStress);
   if (allow !== null) bending(stresses.tension, stresses.compression, allow, "", ["limits", "bendingStress"]);
@@ -85,12 +91,20 @@ export function checkMember(solution: CheckedSolution, sections: MemberSections,
     if (partAllow === null) return;
     const p = stresses.parts.find((q) => q.part === i);
     if (p === undefined) fail("part-not-found", ["limits", "bendingStressByPart", i], `No part ${i} in the sections' parts: give the sections with their parts (memberSection does) or remove this limit.`);
-    bending(p.tension, p.compression, partAllow, `, part ${i}`, ["limits", "bendingStressByPart", i]);
+    bending(p.tension, p.compression, partAllow, `, part ${i}`, ["limits", "bendingStressByPart", i], i);
   });
   if (sound.shearStress !== undefined && stresses.shear !== null) {
     const v = stresses.shear;
-    checks.push(checkResultAt(["limits", "shearStress"], "shear-stress", "shear stress", v.stress, sound.shearStress, { x: v.x, y: v.y, stretch: v.stretch }, "tau = |V| Q / (I_z b)"));
+    const formula = stresses.shearByMaterial.length > 0 ? "tau = max over materials of n_i |V| Q* / (I* b*)" : "tau = |V| Q / (I_z b)";
+    checks.push(checkResultAt(["limits", "shearStress"], "shear-stress", "shear stress", v.stress, sound.shearStress, { x: v.x, y: v.y, stretch: v.stretch }, formula));
   }
+  sound.shearStressByPart?.forEach((allowable, i) => {
+    if (allowable === null) return;
+    const path = ["limits", "shearStressByPart", i];
+    const p = stresses.shearByPart.find((q) => q.part === i);
+    if (p === undefined) fail("part-not-found", path, `No solid part ${i} of several materials in the sections for shear: give sections of the section module with their materials (memberSection does) or remove this limit.`);
+    checks.push(checkResultAt(path, "shear-stress", `shear stress, part ${i}`, p.stress, allowable, { x: p.x, y: p.y, stretch: p.stretch, part: i }, `tau = n |V| Q* / (I* b*) in part ${i}`));
+  });
   const list = deflectionLimits(sound);
   list.forEach((limit, i) => {
     const path = Array.isArray(limits.deflection) ? ["limits", "deflection", i] : ["limits", "deflection"];

@@ -46,6 +46,20 @@ export interface PeakShearStress {
   readonly stretch: number;
 }
 
+/** The peak shear stress in one material of a multi-material section along a member. */
+export interface MaterialPeakShearStress extends PeakShearStress {
+  /** The material's modular ratio n = E / E_ref (parts of equal modulus are one material). */
+  readonly modularRatio: number;
+  /** Indices of the material's solid parts (in the section of the stretch where the peak is). */
+  readonly parts: readonly number[];
+}
+
+/** The peak shear stress in one solid part of a multi-material section along a member, over the part's own heights. */
+export interface PartPeakShearStress extends PeakShearStress {
+  /** The part's index. */
+  readonly part: number;
+}
+
 /** Peak stresses anywhere on a member. */
 export interface MemberStresses {
   /** Tag. */
@@ -54,8 +68,19 @@ export interface MemberStresses {
   readonly tension: PeakBendingStress;
   /** The most compressive bending stress and where. */
   readonly compression: PeakBendingStress;
-  /** The largest shear stress and where; null when no stretch described its section for shear. */
+  /**
+   * The largest shear stress and where; null when no stretch described its section for shear.
+   * For a section of several materials (from the section module), the largest of the materials'
+   * own stresses tau_i = n_i |V| Q* / (I* b*), not the transformed section's.
+   */
   readonly shear: PeakShearStress | null;
+  /**
+   * Sections of several materials from the section module: each material's own peak shear
+   * stress, by modular ratio in the order first met; empty otherwise. Check each against its own allowable.
+   */
+  readonly shearByMaterial: readonly MaterialPeakShearStress[];
+  /** Sections of several materials from the section module: each solid part's peak shear stress over its own heights, by part index; empty otherwise. */
+  readonly shearByPart: readonly PartPeakShearStress[];
   /** Peaks in each part, when the sections were given with their parts (multi-material); empty otherwise. */
   readonly parts: readonly PartPeakStresses[];
 }
@@ -70,6 +95,8 @@ export function stressesOf(solution: CheckedSolution, stretches: readonly Resolv
   let compression = at(0, 0, "top", stretches[0]?.top ?? 0, 0, 0);
   const parts = new Map<number, { tension: PeakBendingStress; compression: PeakBendingStress }>();
   let shear: PeakShearStress | null = null;
+  const byMaterial = new Map<number, MaterialPeakShearStress>();
+  const byPartShear = new Map<number, PartPeakShearStress>();
   stretches.forEach((s, i) => {
     const m = extremesOf(solution.moment, s.from, s.to);
     // sagging (M > 0) puts fibres below the centroid in tension, hogging (M < 0) those above
@@ -93,10 +120,21 @@ export function stressesOf(solution: CheckedSolution, stretches: readonly Resolv
       const big = Math.abs(v.max.value) >= Math.abs(v.min.value) ? v.max : v.min;
       const stress = Math.abs(big.value) * s.unitShear.stress;
       if (shear === null || stress > shear.stress) shear = { stress, x: big.at, y: s.unitShear.y, shear: big.value, stretch: i };
+      for (const m of s.unitShear.materials ?? []) {
+        const ms = Math.abs(big.value) * m.stress;
+        const old = byMaterial.get(m.modularRatio);
+        if (old === undefined || ms > old.stress) byMaterial.set(m.modularRatio, { modularRatio: m.modularRatio, parts: m.parts, stress: ms, x: big.at, y: m.y, shear: big.value, stretch: i });
+        for (const b of m.byPart) {
+          const ps = Math.abs(big.value) * b.stress;
+          const was = byPartShear.get(b.part);
+          if (was === undefined || ps > was.stress) byPartShear.set(b.part, { part: b.part, stress: ps, x: big.at, y: b.y, shear: big.value, stretch: i });
+        }
+      }
     }
   });
   const byPart = [...parts.entries()].sort((a, b) => a[0] - b[0]).map(([part, p]): PartPeakStresses => ({ part, ...p }));
-  return { kind: "member-stresses", tension, compression, shear, parts: byPart };
+  const shearByPart = [...byPartShear.values()].sort((a, b) => a.part - b.part);
+  return { kind: "member-stresses", tension, compression, shear, shearByMaterial: [...byMaterial.values()], shearByPart, parts: byPart };
 }
 
 /**
@@ -106,7 +144,9 @@ export function stressesOf(solution: CheckedSolution, stretches: readonly Resolv
  * unsymmetric section (a T) the two can govern at different places, so all four are compared:
  * sigma = -M y / I_z at y = top and y = bottom. The moment extremes are exact (roots of the
  * derivative of the moment polynomial on each piece). The peak shear stress is the largest |V|
- * on each stretch times the section's peak of Q / (I b) over its depth.
+ * on each stretch times the section's peak of Q / (I b) over its depth; for a section of
+ * several materials, by the transformed section, each material's own peak n_i |V| Q* / (I* b*)
+ * and each solid part's (over the part's heights), with `shear` the largest of them.
  *
  * @param solution - A solved member (`solveBeam`'s result).
  * @param sections - One section for the whole member, or stretches tiling it.

@@ -66,6 +66,15 @@ export interface SectionStretch extends MemberSection {
 /** One section for the whole member, or stretches that tile it from 0 to its length in order. */
 export type MemberSections = MemberSection | readonly SectionStretch[];
 
+/** One material's peak shear stress per unit shear force (a magnitude), with each of its parts'. */
+export interface UnitMaterialShear {
+  readonly modularRatio: number;
+  readonly parts: readonly number[];
+  readonly stress: number;
+  readonly y: number;
+  readonly byPart: readonly { readonly part: number; readonly stress: number; readonly y: number }[];
+}
+
 /** A stretch with its section reduced to numbers. */
 export interface ResolvedStretch {
   readonly from: number;
@@ -73,14 +82,22 @@ export interface ResolvedStretch {
   readonly inertia: number;
   readonly top: number;
   readonly bottom: number;
-  /** Peak shear stress per unit shear force and its height, or null when no bands were given. */
-  readonly unitShear: { readonly stress: number; readonly y: number } | null;
+  /**
+   * Peak shear stress per unit shear force and its height, or null when no bands were given; for
+   * a section of several materials the largest of the materials' own, with each material's and
+   * each solid part's peak.
+   */
+  readonly unitShear: { readonly stress: number; readonly y: number; readonly materials: readonly UnitMaterialShear[] | null } | null;
   /** Fibres to check: [part index (-1 for the whole section), n, y, which]. */
   readonly fibres: readonly (readonly [number, number, number, "top" | "bottom"])[];
 }
 
-/** Validates the sections against a member of `length` and reduces them to numbers. */
-export function resolveSections(found: IssueCollector, sections: MemberSections, length: number, path: IssuePath): ResolvedStretch[] {
+/**
+ * Validates the sections against a member of `length` and reduces them to numbers. A section
+ * in separate pieces has no shear stress (`unitShear` null) unless `needShear`, when that is
+ * an error (`section-not-connected`).
+ */
+export function resolveSections(found: IssueCollector, sections: MemberSections, length: number, path: IssuePath, needShear = false): ResolvedStretch[] {
   const list: readonly SectionStretch[] = Array.isArray(sections)
     ? (sections as readonly SectionStretch[])
     : [{ ...(sections as MemberSection), from: 0, to: length }];
@@ -113,11 +130,26 @@ export function resolveSections(found: IssueCollector, sections: MemberSections,
       const peak = Array.isArray(s.shear)
         ? tryPeakShearStress(1, s.shear as readonly DepthBand[], inertia)
         : trySectionPeakShearStress(1, s.shear as Section, s.referenceModulus === undefined ? undefined : { referenceModulus: s.referenceModulus });
-      if (!peak.ok) {
+      if (!peak.ok && (needShear || !peak.error.issues.every((x) => x.code === "section-not-connected"))) {
         found.addAll(peak.error.issues.map((x) => ({ ...x, path: x.path[0] === "bands" ? x.path.slice(1) : x.path })), [...p, "shear"]);
         return;
       }
-      unitShear = { stress: Math.abs(peak.value.stress), y: peak.value.y };
+      // a section in separate pieces, for bending only: no shear stress (unitShear stays null)
+      if (peak.ok) {
+        const materials = peak.value.materials?.map((m): UnitMaterialShear => ({
+          modularRatio: m.modularRatio,
+          parts: m.parts,
+          stress: Math.abs(m.stress),
+          y: m.y,
+          byPart: (m.byPart ?? []).map((b) => ({ part: b.part, stress: Math.abs(b.stress), y: b.y })),
+        }));
+        if (materials === undefined || materials.length === 0) unitShear = { stress: Math.abs(peak.value.stress), y: peak.value.y, materials: null };
+        else {
+          // the largest of the materials' own stresses, not the transformed section's (in the reference material)
+          const top = materials.reduce((a, b) => (b.stress > a.stress ? b : a));
+          unitShear = { stress: top.stress, y: top.y, materials };
+        }
+      }
     }
     const fibres: [number, number, number, "top" | "bottom"][] = [];
     const parts = s.properties.parts;

@@ -16,6 +16,8 @@ export interface CheckLocation {
   readonly span?: number;
   /** For stress checks: the index of the section stretch (0 for a uniform member). */
   readonly stretch?: number;
+  /** For checks of one part of a multi-material section (`bendingStressByPart`, `shearStressByPart`): the part's index. */
+  readonly part?: number;
 }
 
 /**

@@ -94,15 +94,34 @@ export interface ModelSectionResult {
   readonly secondMomentZ: number;
   /** Second moment about the vertical centroidal axis, in the second-moment unit. */
   readonly secondMomentY: number;
-  /** Product moment of area about the centroidal axes, in the second-moment unit. */
+  /** Product moment of area I_yz = integral of y z dA about the centroidal axes, in the second-moment unit (any sign). */
+  readonly productMoment: number;
+  /**
+   * The extreme fibres as y measured up from the centroid, in the section-length unit: `top`
+   * (>= 0) and `bottom` (<= 0), as `sectionProperties(...).extremes` of the typed API.
+   */
+  readonly extremes: {
+    /** y of the top fibre, up from the centroid (>= 0). */
+    readonly top: number;
+    /** y of the bottom fibre, up from the centroid (<= 0). */
+    readonly bottom: number;
+  };
+  /** Elastic section moduli (positive), in the section-modulus unit: `top` = I_z / top, `bottom` = I_z / |bottom|. */
+  readonly sectionModulus: {
+    /** I_z over the distance to the top fibre. */
+    readonly top: number;
+    /** I_z over the distance to the bottom fibre. */
+    readonly bottom: number;
+  };
+  /** @deprecated Use `productMoment` (same value); not in the JSON form. */
   readonly productMomentYZ: number;
-  /** Elastic section modulus to the top fibre, I_z / y_top, in the section-modulus unit. */
+  /** @deprecated Use `sectionModulus.top` (same value); not in the JSON form. */
   readonly sectionModulusTop: number;
-  /** Elastic section modulus to the bottom fibre, I_z / y_bottom, in the section-modulus unit. */
+  /** @deprecated Use `sectionModulus.bottom` (same value); not in the JSON form. */
   readonly sectionModulusBottom: number;
-  /** Distance from the centroid up to the top fibre, in the section-length unit. */
+  /** @deprecated Use `extremes.top` (same value); not in the JSON form. */
   readonly yTop: number;
-  /** Distance from the centroid down to the bottom fibre (positive), in the section-length unit. */
+  /** @deprecated Use `-extremes.bottom` (a positive distance); not in the JSON form. */
   readonly yBottom: number;
 }
 
@@ -131,14 +150,26 @@ export interface ModelShearStressExtreme {
   readonly y: number;
 }
 
+/** The peak shear stress in one solid part of a section of several materials, over the part's own heights. */
+export interface ModelPartShearStress extends ModelShearStressExtreme {
+  /** The part's index in `section.parts`. */
+  readonly part: number;
+}
+
 /** The largest tensile and compressive bending stress on the member. */
 export interface ModelStress {
   /** Largest tension (a value >= 0). */
   readonly tension: ModelStressExtreme;
   /** Largest compression (a value <= 0). */
   readonly compression: ModelStressExtreme;
-  /** Largest shear stress magnitude and where it acts; absent when the shear force is zero everywhere. */
+  /**
+   * Largest shear stress magnitude and where it acts; absent when the shear force is zero
+   * everywhere. For a section of several materials, the largest of the materials' own stresses
+   * n |V| Q* / (I* b*) (transformed section), not the transformed section's.
+   */
   readonly shear?: ModelShearStressExtreme;
+  /** For a section of several materials: each solid part's own peak shear stress, by part index. */
+  readonly shearByPart?: readonly ModelPartShearStress[];
 }
 
 /**
@@ -171,6 +202,8 @@ export interface ModelCheck {
   readonly fibre?: "top" | "bottom";
   /** Stress checks: the fibre or cut height above the centroid (negative below), in the section-length unit. */
   readonly y?: number;
+  /** Checks of one part of a section of several materials: the part's index in `section.parts`. */
+  readonly part?: number;
 }
 
 /** A caution about the model or its results that does not stop the analysis. */

@@ -5,7 +5,7 @@ import { beamInputInSI } from "./beam-input.js";
 import { modelVerdicts } from "./checks.js";
 import { diagramsOf, peaksInModelUnits } from "./diagrams.js";
 import type { Model } from "./model.js";
-import { sectionInSI, sectionResult, type SectionInSI } from "./model-section.js";
+import { sectionInSI, sectionResult, withDeprecatedNames, type SectionInSI } from "./model-section.js";
 import { plainResults } from "./plain.js";
 import { refuseNotFinite, stiffnessPath } from "./not-finite.js";
 import { checkTypedModel } from "./typed-check.js";
@@ -115,6 +115,7 @@ export function analyzeModel(model: Model): ModelAnalysis {
     units: model.units,
     scale,
     ...results,
+    ...(results.section === undefined ? {} : { section: withDeprecatedNames(results.section) }),
     solution,
     ...(section === undefined ? {} : { sectionGeometry: section.geometry }),
   };

@@ -15,6 +15,7 @@ import {
   type SpanDeflection,
 } from "../check/index.js";
 import { FlexuraError, isFlexuraError, type IssuePath } from "../errors/index.js";
+import { connectedPieces } from "../section/index.js";
 import type { ModelCheck, ModelScale, ModelStress, ModelStressExtreme, ModelWarning } from "./analysis.js";
 import type { Model, ModelDeflectionLimit } from "./model.js";
 import { isMultiMaterial, type SectionInSI } from "./model-section.js";
@@ -79,6 +80,7 @@ function inModelUnits(c: CheckResult, model: Model, scale: ModelScale, context: 
         description: `extreme-fibre bending stress (${sense})${inPart} against ${fmt(capacity)} ${units.stress}`,
         ...(c.at.fibre === undefined ? {} : { fibre: c.at.fibre }),
         ...(c.at.y === undefined ? {} : { y: c.at.y / scale.sectionLength }),
+        ...(context.part === undefined ? {} : { part: context.part }),
       };
     }
     case "shear-stress": {
@@ -89,8 +91,9 @@ function inModelUnits(c: CheckResult, model: Model, scale: ModelScale, context: 
         demand: c.demand / scale.stress,
         capacity,
         unit: units.stress,
-        description: `peak shear stress against ${fmt(capacity)} ${units.stress}`,
+        description: `peak shear stress${context.part === undefined ? "" : ` in part ${context.part}`} against ${fmt(capacity)} ${units.stress}`,
         ...(c.at.y === undefined ? {} : { y: c.at.y / scale.sectionLength }),
+        ...(context.part === undefined ? {} : { part: context.part }),
       };
     }
     default:
@@ -109,6 +112,9 @@ function stressOf(r: Pick<MemberCheck, "stresses">, scale: ModelScale, multiMate
     tension: extremeOf(s.tension, scale, multiMaterial),
     compression: extremeOf(s.compression, scale, multiMaterial),
     ...(v === null || v.shear === 0 ? {} : { shear: { value: v.stress / scale.stress, at: v.x / scale.length, y: v.y / scale.sectionLength } }),
+    ...(!multiMaterial || v === null || v.shear === 0 || s.shearByPart.length === 0
+      ? {}
+      : { shearByPart: s.shearByPart.map((p) => ({ part: p.part, value: p.stress / scale.stress, at: p.x / scale.length, y: p.y / scale.sectionLength })) }),
   };
 }
 
@@ -117,12 +123,13 @@ function stressOf(r: Pick<MemberCheck, "stresses">, scale: ModelScale, multiMate
  * own, else `limits.bendingStress` for parts of the model's material; null for holes and for
  * parts of another material without one), and the parts of another material left unchecked.
  */
-function partAllowables(model: Model, section: ModelBuiltUpSection, scale: ModelScale): { byPart: (number | null)[]; unchecked: number[] } {
-  const common = model.limits.bendingStress;
+function partAllowables(model: Model, section: ModelBuiltUpSection, scale: ModelScale, which: "bendingStress" | "shearStress"): { byPart: (number | null)[]; unchecked: number[] } {
+  const common = model.limits[which];
   const unchecked: number[] = [];
   const byPart = section.parts.map((p, i) => {
     if (p.hole) return null;
-    if (p.bendingStress !== undefined) return p.bendingStress * scale.stress;
+    const own = p[which];
+    if (own !== undefined) return own * scale.stress;
     if (p.material === undefined && p.modularRatio === undefined) return common === undefined ? null : common * scale.stress;
     unchecked.push(i);
     return null;
@@ -130,27 +137,44 @@ function partAllowables(model: Model, section: ModelBuiltUpSection, scale: Model
   return { byPart, unchecked: byPart.some((b) => b !== null) ? unchecked : [] };
 }
 
-/** A path into the check module's limits as a path into the model: a part's allowable is its own `bendingStress`, else the common one. */
+/** A path into the check module's limits as a path into the model: a part's allowable is its own `bendingStress` or `shearStress`, else the common one. */
 function limitPathInModel(model: Model, path: IssuePath): IssuePath {
-  if (path[1] !== "bendingStressByPart" || typeof path[2] !== "number") return path;
+  const which = path[1] === "bendingStressByPart" ? "bendingStress" : path[1] === "shearStressByPart" ? "shearStress" : undefined;
+  if (which === undefined || typeof path[2] !== "number") return path;
   const section = model.section;
   const part = section !== undefined && isMultiMaterial(section) ? section.parts[path[2]] : undefined;
-  return part?.bendingStress === undefined ? ["limits", "bendingStress"] : ["section", "parts", path[2], "bendingStress"];
+  return part?.[which] === undefined ? ["limits", which] : ["section", "parts", path[2], which];
 }
 
 /** Runs the check module on a member with a section; its problems are reported under `section`. */
 function withSection(model: Model, solution: BeamSolution, section: SectionInSI, scale: ModelScale, warnings: ModelWarning[]): ModelVerdicts {
-  const multi = model.section !== undefined && isMultiMaterial(model.section) ? partAllowables(model, model.section, scale) : undefined;
-  const { bendingStress: _common, ...others } = memberLimitsInSI(model, scale);
-  const limits: MemberLimits = multi === undefined ? memberLimitsInSI(model, scale) : { ...others, bendingStressByPart: multi.byPart };
-  if (multi !== undefined && multi.unchecked.length > 0) {
+  const built = model.section !== undefined && isMultiMaterial(model.section) ? model.section : undefined;
+  const multi = built === undefined ? undefined : partAllowables(model, built, scale, "bendingStress");
+  const multiShear = built === undefined ? undefined : partAllowables(model, built, scale, "shearStress");
+  const { bendingStress: _common, shearStress: _commonShear, ...others } = memberLimitsInSI(model, scale);
+  const limits: MemberLimits =
+    multi === undefined || multiShear === undefined
+      ? memberLimitsInSI(model, scale)
+      : { ...others, bendingStressByPart: multi.byPart, ...(multiShear.byPart.some((b) => b !== null) ? { shearStressByPart: multiShear.byPart } : {}) };
+  const unchecked = (list: readonly number[], what: string, field: string): void => {
+    if (list.length === 0) return;
     warnings.push({
-      code: "part-bending-stress-not-checked",
-      message: `The bending stress in part${multi.unchecked.length === 1 ? "" : "s"} ${multi.unchecked.join(", ")} of the section is not checked: a part of its own material needs its own "bendingStress".`,
+      code: `part-${field === "bendingStress" ? "bending" : "shear"}-stress-not-checked`,
+      message: `The ${what} in part${list.length === 1 ? "" : "s"} ${list.join(", ")} of the section is not checked: a part of its own material needs its own "${field}".`,
+    });
+  };
+  unchecked(multi?.unchecked ?? [], "bending stress", "bendingStress");
+  unchecked(multiShear?.unchecked ?? [], "shear stress", "shearStress");
+  const pieces = section.geometry.parts.length > 1 ? connectedPieces(section.geometry) : [];
+  if (pieces.length > 1) {
+    warnings.push({
+      code: "section-not-connected",
+      message: `The section is in ${pieces.length} separate pieces (parts ${pieces.map((p) => `[${p.join(", ")}]`).join(", ")}): its bending properties assume they act together, joined by connectors the model does not describe, and no shear stress is given (a shear-stress limit cannot be checked). Make the parts meet along an edge.`,
     });
   }
   const member = memberSection(section.geometry, section.referenceModulus === undefined ? undefined : { referenceModulus: section.referenceModulus });
-  const anyLimit = limits.bendingStress !== undefined || limits.shearStress !== undefined || limits.deflection !== undefined || (limits.bendingStressByPart ?? []).some((b) => b !== null);
+  const anyLimit =
+    limits.bendingStress !== undefined || limits.shearStress !== undefined || limits.deflection !== undefined || [...(limits.bendingStressByPart ?? []), ...(limits.shearStressByPart ?? [])].some((b) => b !== null);
   let r: Pick<MemberCheck, "checks" | "stresses" | "deflections">;
   try {
     // With no limit there is nothing to check (checkMember refuses to give a verdict then): the stresses alone.
@@ -159,14 +183,8 @@ function withSection(model: Model, solution: BeamSolution, section: SectionInSI,
     if (!isFlexuraError(e)) throw e;
     throw new FlexuraError(e.issues.map((i) => ({ ...i, path: i.path[0] === "limits" ? limitPathInModel(model, i.path) : ["section"] })));
   }
-  // checkMember gives the bending checks of the parts in part order, tension then compression.
-  const checkedParts = multi?.byPart.flatMap((b, i) => (b === null ? [] : [i])) ?? [];
-  let bending = 0;
-  const withPart = r.checks.map((c) => {
-    if (multi === undefined || (c.check !== "bending-tension" && c.check !== "bending-compression")) return { c };
-    const part = checkedParts[Math.floor(bending++ / 2)];
-    return part === undefined ? { c } : { c, part };
-  });
+  // checkMember names the part of each per-part check in its location
+  const withPart = r.checks.map((c) => (c.at.part === undefined ? { c } : { c, part: c.at.part }));
   // Deflection checks first, then stresses: the order the model's results have always had.
   const ordered = [...withPart.filter((x) => x.c.check === "deflection"), ...withPart.filter((x) => x.c.check !== "deflection")];
   const checks = ordered.map((x) => inModelUnits(x.c, model, scale, { deflections: r.deflections, ...(x.part === undefined ? {} : { part: x.part }) }));

@@ -65,6 +65,8 @@ export interface ModelFilePartCommon {
   readonly modularRatio?: number;
   /** Allowable bending stress in this part. */
   readonly bendingStress?: ModelQuantity;
+  /** Allowable shear stress in this part. */
+  readonly shearStress?: ModelQuantity;
 }
 
 /** A part of a built-up section as written in a model file (angles in the rotation unit or with units). */

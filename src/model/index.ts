@@ -41,6 +41,7 @@ export type {
   ModelStress,
   ModelStressExtreme,
   ModelShearStressExtreme,
+  ModelPartShearStress,
   ModelCheck,
   ModelWarning,
   ModelScale,

@@ -148,7 +148,7 @@ export function sectionInSI(model: Model, scale: ModelScale): SectionInSI | unde
   }
 }
 
-/** The section's properties in the model's units. */
+/** The section's properties in the model's units, with the names and frame of the typed API's `sectionProperties`. */
 export function sectionResult(shape: string, p: SectionProperties, scale: ModelScale): ModelSectionResult {
   const len = scale.sectionLength;
   return {
@@ -157,10 +157,29 @@ export function sectionResult(shape: string, p: SectionProperties, scale: ModelS
     centroid: { y: p.centroid.y / len, z: p.centroid.z / len },
     secondMomentZ: p.secondMomentZ / scale.secondMoment,
     secondMomentY: p.secondMomentY / scale.secondMoment,
-    productMomentYZ: p.productMoment / scale.secondMoment,
-    sectionModulusTop: p.sectionModulus.top / scale.sectionModulus,
-    sectionModulusBottom: p.sectionModulus.bottom / scale.sectionModulus,
-    yTop: p.extremes.top / len,
-    yBottom: -p.extremes.bottom / len,
-  };
+    productMoment: p.productMoment / scale.secondMoment,
+    extremes: { top: p.extremes.top / len, bottom: p.extremes.bottom / len },
+    sectionModulus: { top: p.sectionModulus.top / scale.sectionModulus, bottom: p.sectionModulus.bottom / scale.sectionModulus },
+  } as ModelSectionResult;
+}
+
+/**
+ * A frozen copy of the section result with the names before 0.1 as read-only aliases that JSON
+ * leaves out (not enumerable): `productMomentYZ`, `sectionModulusTop`, `sectionModulusBottom`,
+ * `yTop`, `yBottom` (a positive distance). Deprecated; to be removed.
+ */
+export function withDeprecatedNames(s: ModelSectionResult): ModelSectionResult {
+  const alias = (value: number): PropertyDescriptor => ({ value, enumerable: false, writable: false, configurable: false });
+  return Object.freeze(
+    Object.defineProperties(
+      { ...s },
+      {
+        productMomentYZ: alias(s.productMoment),
+        sectionModulusTop: alias(s.sectionModulus.top),
+        sectionModulusBottom: alias(s.sectionModulus.bottom),
+        yTop: alias(s.extremes.top),
+        yBottom: alias(-s.extremes.bottom),
+      },
+    ),
+  );
 }

@@ -63,11 +63,14 @@ function readPart(reader: Reader, value: unknown, path: IssuePath): ModelSection
   if (typeof ratio === "number") requirePositive(reader, ratio, [...path, "modularRatio"], "modular ratio");
   const bendingStress = readQuantity(reader, p["bendingStress"], "stress", [...path, "bendingStress"]);
   requirePositive(reader, bendingStress, [...path, "bendingStress"], "allowable bending stress");
+  const shearStress = readQuantity(reader, p["shearStress"], "stress", [...path, "shearStress"]);
+  requirePositive(reader, shearStress, [...path, "shearStress"], "allowable shear stress");
   const common = {
     hole: p["hole"] === true,
     ...(material === undefined ? {} : { material }),
     ...(typeof ratio === "number" && Number.isFinite(ratio) ? { modularRatio: ratio } : {}),
     ...(bendingStress === undefined ? {} : { bendingStress }),
+    ...(shearStress === undefined ? {} : { shearStress }),
   };
   const centreOf = (name: string): ModelSectionPoint | undefined => readPoint(reader, p[name], [...path, name]);
   const radius = (): number | undefined => readLength(reader, p["radius"], [...path, "radius"], "radius");

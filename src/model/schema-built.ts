@@ -55,6 +55,10 @@ const common = {
     $ref: "#/$defs/stress",
     description: "Allowable bending stress in this part (stress unit), for a section of several materials. Parts of the model's material default to `limits.bendingStress`.",
   },
+  shearStress: {
+    $ref: "#/$defs/stress",
+    description: "Allowable shear stress in this part (stress unit), for a section of several materials. Parts of the model's material default to `limits.shearStress`.",
+  },
 } as const;
 
 /** A part may give its own `material` or a `modularRatio`, not both. */

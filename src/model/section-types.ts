@@ -66,6 +66,12 @@ interface ModelPartCommon {
    * `limits.bendingStress`.
    */
   readonly bendingStress?: number;
+  /**
+   * Allowable shear stress in this part (stress unit), checked against its own peak shear stress
+   * n |V| Q* / (I* b*) in a section of several materials; parts of the model's material default
+   * to `limits.shearStress`.
+   */
+  readonly shearStress?: number;
 }
 
 /** A simple polygon, corners in order (either winding), in the section-length unit. */

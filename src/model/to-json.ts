@@ -11,6 +11,7 @@ function partToJson(p: ModelSectionPart): ModelFileSectionPart {
     ...(p.material === undefined ? {} : { material: materialToJson(p.material) }),
     ...(p.modularRatio === undefined ? {} : { modularRatio: p.modularRatio }),
     ...(p.bendingStress === undefined ? {} : { bendingStress: p.bendingStress }),
+    ...(p.shearStress === undefined ? {} : { shearStress: p.shearStress }),
   };
   switch (p.kind) {
     case "polygon":

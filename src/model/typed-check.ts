@@ -88,7 +88,7 @@ function checkPart(c: TypedCheck, value: unknown, path: IssuePath): void {
   if (p === undefined) return;
   if (typeof own(p, "hole") !== "boolean") c.wrong([...path, "hole"], "true or false", own(p, "hole"));
   if (own(p, "material") !== undefined) checkMaterial(c, own(p, "material"), [...path, "material"]);
-  c.numbers(p, ["modularRatio", "bendingStress"], path, true);
+  c.numbers(p, ["modularRatio", "bendingStress", "shearStress"], path, true);
   const kind = own(p, "kind");
   if (!c.option(kind, SECTION_PART_TYPES, [...path, "kind"])) return;
   const k = kind as (typeof SECTION_PART_TYPES)[number];

@@ -127,8 +127,8 @@ function sectionDrawing(analysis: ModelAnalysis, name: string, outline: readonly
   if (outline === undefined || s === undefined || st === undefined) return undefined;
   const u = analysis.units;
   const governing = Math.abs(st.tension.value) >= Math.abs(st.compression.value) ? st.tension : st.compression;
-  const bottom = -s.yBottom;
-  const top = s.yTop;
+  const bottom = s.extremes.bottom;
+  const top = s.extremes.top;
   const left = diagramValueAt(analysis.diagrams.moment, governing.at, "left");
   const right = diagramValueAt(analysis.diagrams.moment, governing.at, "right");
   const moment = Math.abs(left) > Math.abs(right) ? left : right;

@@ -92,11 +92,11 @@ export function reportSection(analysis: ModelAnalysis): string {
         ["centroid z", formatReportQuantity(s.centroid.z, u.sectionLength)],
         ["second moment I_z (bending axis)", formatReportQuantity(s.secondMomentZ, u.secondMoment)],
         ["second moment I_y", formatReportQuantity(s.secondMomentY, u.secondMoment)],
-        ["product moment I_yz", formatReportQuantity(s.productMomentYZ, u.secondMoment)],
-        ["centroid to top fibre", formatReportQuantity(s.yTop, u.sectionLength)],
-        ["centroid to bottom fibre", formatReportQuantity(s.yBottom, u.sectionLength)],
-        ["section modulus, top", formatReportQuantity(s.sectionModulusTop, u.sectionModulus)],
-        ["section modulus, bottom", formatReportQuantity(s.sectionModulusBottom, u.sectionModulus)],
+        ["product moment I_yz", formatReportQuantity(s.productMoment, u.secondMoment)],
+        ["extreme fibre y, top (up from the centroid)", formatReportQuantity(s.extremes.top, u.sectionLength)],
+        ["extreme fibre y, bottom", formatReportQuantity(s.extremes.bottom, u.sectionLength)],
+        ["section modulus, top", formatReportQuantity(s.sectionModulus.top, u.sectionModulus)],
+        ["section modulus, bottom", formatReportQuantity(s.sectionModulus.bottom, u.sectionModulus)],
       ]),
     ),
   );
@@ -110,6 +110,7 @@ export function reportSection(analysis: ModelAnalysis): string {
       ["largest compression", formatReportQuantity(st.compression.value, u.stress), where(st.compression.at, st.compression.y)],
     ];
     if (st.shear !== undefined) rows.push(["largest shear stress", formatReportQuantity(st.shear.value, u.stress), `x = ${formatReportQuantity(st.shear.at, u.length)}`]);
+    for (const p of st.shearByPart ?? []) rows.push([`largest shear stress, part ${p.part}`, formatReportQuantity(p.value, u.stress), where(p.at, p.y)]);
     out.push(indent(textTable(rows)));
   }
   return out.join("\n");

@@ -52,8 +52,11 @@ function fractionOf(edges: Float64Array, o: number, z: number, y: number, slack:
   return u >= -slack && u <= 1 + slack ? Math.min(1, Math.max(0, u)) : Number.NaN;
 }
 
-/** Where the circles or lines carrying edges a and b meet: [z, y, z, y, ...] (tangencies skipped). */
-function meetings(edges: Float64Array, a: number, b: number): number[] {
+/** Scratch for {@link meetings}: up to two points, [z, y, z, y]. */
+const met = new Float64Array(4);
+
+/** Where the circles or lines carrying edges a and b meet, into `met` as [z, y, z, y]; returns how many numbers (0, 2 or 4; tangencies skipped). */
+function meetings(edges: Float64Array, a: number, b: number): number {
   const arcA = edges[a] === ARC;
   const arcB = edges[b] === ARC;
   if (arcA && arcB) {
@@ -61,11 +64,15 @@ function meetings(edges: Float64Array, a: number, b: number): number[] {
     const z2 = edges[b + 1]!, y2 = edges[b + 2]!, r2 = edges[b + 3]!;
     const dz = z2 - z1, dy = y2 - y1;
     const d = Math.hypot(dz, dy);
-    if (d === 0 || d > r1 + r2 || d < Math.abs(r1 - r2)) return [];
+    if (d === 0 || d > r1 + r2 || d < Math.abs(r1 - r2)) return 0;
     const along = (r1 * r1 - r2 * r2 + d * d) / (2 * d);
     const h = Math.sqrt(Math.max(0, r1 * r1 - along * along));
     const mz = z1 + (along * dz) / d, my = y1 + (along * dy) / d;
-    return [mz - (h * dy) / d, my + (h * dz) / d, mz + (h * dy) / d, my - (h * dz) / d];
+    met[0] = mz - (h * dy) / d;
+    met[1] = my + (h * dz) / d;
+    met[2] = mz + (h * dy) / d;
+    met[3] = my - (h * dz) / d;
+    return 4;
   }
   if (arcA || arcB) {
     const arc = arcA ? a : b;
@@ -77,18 +84,23 @@ function meetings(edges: Float64Array, a: number, b: number): number[] {
     const qb = 2 * (dz * (z0 - zc) + dy * (y0 - yc));
     const qc = (z0 - zc) ** 2 + (y0 - yc) ** 2 - r * r;
     const disc = qb * qb - 4 * qa * qc;
-    if (!(disc > 0)) return [];
+    if (!(disc > 0)) return 0;
     const root = Math.sqrt(disc);
-    const out: number[] = [];
-    for (const t of [(-qb - root) / (2 * qa), (-qb + root) / (2 * qa)]) out.push(z0 + t * dz, y0 + t * dy);
-    return out;
+    const t0 = (-qb - root) / (2 * qa), t1 = (-qb + root) / (2 * qa);
+    met[0] = z0 + t0 * dz;
+    met[1] = y0 + t0 * dy;
+    met[2] = z0 + t1 * dz;
+    met[3] = y0 + t1 * dy;
+    return 4;
   }
   const az = edges[a + 1]!, ay = edges[a + 2]!, adz = edges[a + 3]! - az, ady = edges[a + 4]! - ay;
   const bz = edges[b + 1]!, by = edges[b + 2]!, bdz = edges[b + 3]! - bz, bdy = edges[b + 4]! - by;
   const den = adz * bdy - ady * bdz;
-  if (den === 0) return [];
+  if (den === 0) return 0;
   const t = ((bz - az) * bdy - (by - ay) * bdz) / den;
-  return [az + t * adz, ay + t * ady];
+  met[0] = az + t * adz;
+  met[1] = ay + t * ady;
+  return 2;
 }
 
 const boxA = new Float64Array(4);
@@ -96,12 +108,19 @@ const boxB = new Float64Array(4);
 
 /** The bounding box of edge o (an arc lies within one quadrant, so its ends bound it) into `out`. */
 function edgeBox(edges: Float64Array, o: number, out: Float64Array): void {
+  // no tuples here: this runs for every pair of edges the hole checks compare
   let z0: number, y0: number, z1: number, y1: number;
   if (edges[o] === ARC) {
-    [z0, y0] = pointOn(edges, o, 0);
-    [z1, y1] = pointOn(edges, o, 1);
+    const zc = edges[o + 1]!, yc = edges[o + 2]!, r = edges[o + 3]!, t0 = edges[o + 4]!, t1 = edges[o + 5]!;
+    z0 = zc + r * Math.cos(t0);
+    y0 = yc + r * Math.sin(t0);
+    z1 = zc + r * Math.cos(t1);
+    y1 = yc + r * Math.sin(t1);
   } else {
-    [z0, y0, z1, y1] = [edges[o + 1]!, edges[o + 2]!, edges[o + 3]!, edges[o + 4]!];
+    z0 = edges[o + 1]!;
+    y0 = edges[o + 2]!;
+    z1 = edges[o + 3]!;
+    y1 = edges[o + 4]!;
   }
   out[0] = Math.min(z0, z1);
   out[1] = Math.max(z0, z1);
@@ -109,24 +128,24 @@ function edgeBox(edges: Float64Array, o: number, out: Float64Array): void {
   out[3] = Math.max(y0, y1);
 }
 
-/** The fractions along edge o where the boundary [from, to) meets it (or comes within `tolerance`). */
-function splits(edges: Float64Array, o: number, from: number, to: number, tolerance: number): number[] {
-  const out = [0, 1];
+/** The fractions along edge o where the boundary [from, to) meets it (or comes within `tolerance`), appended to `out`. */
+function splits(edges: Float64Array, o: number, from: number, to: number, tolerance: number, out: number[] = [0, 1]): number[] {
   edgeBox(edges, o, boxA);
   const slack = 2 * tolerance;
   for (let e = from; e < to; e++) {
     const q = e * STRIDE;
     edgeBox(edges, q, boxB);
     if (boxB[0]! > boxA[1]! + slack || boxA[0]! > boxB[1]! + slack || boxB[2]! > boxA[3]! + slack || boxA[2]! > boxB[3]! + slack) continue;
-    const m = meetings(edges, o, q);
-    for (let k = 0; k < m.length; k += 2) {
-      const z = m[k]!, y = m[k + 1]!;
+    const count = meetings(edges, o, q);
+    for (let k = 0; k < count; k += 2) {
+      const z = met[k]!, y = met[k + 1]!;
       // on both edges (within their extents, a rounding allowed)
       const u = fractionOf(edges, o, z, y, 1e-12);
       if (!Number.isNaN(u) && !Number.isNaN(fractionOf(edges, q, z, y, 1e-12))) out.push(u);
     }
     // the other boundary's corners on this edge: where it touches, or runs along it
-    const [z, y] = pointOn(edges, q, 0);
+    const z = edges[q] === ARC ? edges[q + 1]! + edges[q + 3]! * Math.cos(edges[q + 4]!) : edges[q + 1]!;
+    const y = edges[q] === ARC ? edges[q + 2]! + edges[q + 3]! * Math.sin(edges[q + 4]!) : edges[q + 2]!;
     const u = fractionOf(edges, o, z, y, 0);
     if (!Number.isNaN(u)) {
       const [pz, py] = pointOn(edges, o, u);
@@ -161,9 +180,9 @@ function boundaryOutside(p: HoleInput, h: number, tolerance: number): [number, n
   const { count, sign, partBox: box, edges, edgeStart } = p;
   for (let e = edgeStart[h]!; e < edgeStart[h + 1]!; e++) {
     const o = e * STRIDE;
-    let cuts = [0, 1];
+    const cuts = [0, 1];
     for (let j = 0; j < count; j++) {
-      if (sign[j] === 1 && boxesMeet(box, h, j, tolerance)) cuts = cuts.concat(splits(edges, o, edgeStart[j]!, edgeStart[j + 1]!, tolerance));
+      if (sign[j] === 1 && boxesMeet(box, h, j, tolerance)) splits(edges, o, edgeStart[j]!, edgeStart[j + 1]!, tolerance, cuts);
     }
     cuts.sort((x, y) => x - y);
     for (let k = 1; k < cuts.length; k++) {
@@ -226,7 +245,7 @@ export function checkHoles(found: IssueCollector, p: HoleInput, tolerance: numbe
     const outside = boundaryOutside(p, i, tolerance) ?? gapInside(p, i, tolerance, step);
     if (outside) {
       const at = { y: outside[1] + ref.y, z: outside[0] + ref.z };
-      found.add("hole-outside-solid", ["parts", i], `The hole reaches outside the solid parts (at y = ${at.y}, z = ${at.z}); keep it inside them.`, { at });
+      found.add("hole-outside-solid", ["parts", i], `This hole reaches outside every solid part (for example at y = ${at.y}, z = ${at.z}); a hole must lie within the solid parts it is cut from.`, { at });
       continue;
     }
     for (let j = 0; j < i; j++) {

@@ -40,3 +40,4 @@ export { builtUp, tryBuiltUp } from "./shapes/builtUp.js";
 export { torsionConstantThinWalled, tryTorsionConstantThinWalled } from "./torsion.js";
 export type { PartOutline, OutlinesOptions } from "./outlines.js";
 export { outlines, tryOutlines } from "./outlines.js";
+export { connectedPieces, tryConnectedPieces } from "./connected.js";

@@ -159,7 +159,7 @@ export function plasticProperties(section: Section): PlasticProperties {
       fy = f;
       first = false;
     } else if (!Object.is(e, E) || !Object.is(f, fy)) {
-      found.add("plastic-needs-one-material", ["parts", i, "material"], "Plastic properties need one material; this part's differs from the first solid part's.");
+      found.add("plastic-needs-one-material", ["parts", i, "material"], "Plastic properties need a section of one material (the same elastic modulus and yield strength in every solid part); this part differs from the first.");
     }
   }
   found.throwIfAny();

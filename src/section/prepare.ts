@@ -163,7 +163,7 @@ function compile(section: Section, found: IssueCollector): PreparedSection | und
     box[3] = Math.max(box[3]!, partBox[i * 4 + 3]!);
   }
   if (!(box[0]! < box[1]!)) {
-    found.add("section-no-solid", ["parts"], "Every part is a hole; add the solid parts.");
+    found.add("section-no-solid", ["parts"], "The section has no solid part (every part is a hole); add the solid parts the holes are cut from.");
     return undefined;
   }
   if (!(Math.max(box[1]! - box[0]!, box[3]! - box[2]!) >= SIZE_FLOOR)) {
@@ -215,7 +215,7 @@ function compile(section: Section, found: IssueCollector): PreparedSection | und
   if (hasMaterial && withMaterial < solids) {
     for (let i = 0; i < count; i++) {
       if (sign[i] === 1 && !parts[i]?.material) {
-        found.add("material-missing", ["parts", i, "material"], "Give every solid part a material, or none.");
+        found.add("material-missing", ["parts", i, "material"], "Some parts have a material and this one does not; give every solid part a material, or none.");
       }
     }
   }
@@ -232,7 +232,7 @@ function compile(section: Section, found: IssueCollector): PreparedSection | und
 
   checkOverlaps(found, { count, edges, edgeStart, sign, partBox, partMoments }, tolerance);
   if (found.empty && !(netArea > 1e-12 * (box[1]! - box[0]!) * (box[3]! - box[2]!))) {
-    found.add("section-area-not-positive", ["parts"], `The holes take away all of the area; they must not overlap or cover the solids.`, { area: netArea });
+    found.add("section-area-not-positive", ["parts"], `The holes take away all of the solid area (net area ${netArea}); holes must not overlap one another or cover the solids.`, { area: netArea });
   }
   if (!found.empty) return undefined;
   const defaultWeights = fillWeights({ count, sign, modulus, hasMaterial }, undefined, ratios, weights);

@@ -42,13 +42,13 @@ export function torsionConstantThinWalled(section: Section): number {
   let j = 0;
   section.parts.forEach((part, i) => {
     if (part.hole === true) {
-      found.add("torsion-closed-section", ["parts", i], "A section with holes is closed: the open-section formula does not apply.");
+      found.add("torsion-closed-section", ["parts", i], "The thin-walled open-section formula does not apply to a section with holes (a closed tube or box is far stiffer in torsion).");
       return;
     }
     if (part.kind === "fillet") return;
     const sides = part.kind === "polygon" ? rectangleSides(part.points) : undefined;
     if (!sides) {
-      found.add("torsion-part-not-plate", ["parts", i], "Not a rectangular plate: the thin-walled formula takes only plates (and skips fillets).");
+      found.add("torsion-part-not-plate", ["parts", i], "Only rectangular plates (and fillets, which are skipped) enter the thin-walled torsion constant; this part is not a rectangle.");
       return;
     }
     const b = Math.max(sides[0], sides[1]);

@@ -51,7 +51,7 @@ function checkMaterial(found: IssueCollector, value: unknown, parent: IssuePath)
   if (value === undefined) return;
   const path = [...parent, "material"];
   if (!isObject(value)) {
-    found.add("material-invalid", path, `The material must be an object { elasticModulus }; got ${describeValue(value)}.`);
+    found.add("material-invalid", path, `The material must be an object { elasticModulus, yieldStrength?, name? }; got ${describeValue(value)}.`);
     return;
   }
   checkFields(found, value, MATERIAL_FIELDS, path, "material");
@@ -88,7 +88,7 @@ function allCollinear(zs: readonly number[], ys: readonly number[], size: number
 function checkPolygon(found: IssueCollector, part: Record<string, unknown>, path: IssuePath): void {
   const points = part["points"];
   if (!Array.isArray(points)) {
-    found.add("polygon-degenerate", [...path, "points"], `A polygon needs a list of points { y, z }; got ${describeValue(points)}.`);
+    found.add("polygon-degenerate", [...path, "points"], `A polygon needs a list of at least three points { y, z }; got ${describeValue(points)}.`);
     return;
   }
   let ok = true;
@@ -117,14 +117,14 @@ function checkPolygon(found: IssueCollector, part: Record<string, unknown>, path
   const pair = findSelfIntersection(zs, ys);
   const area = polygonArea(zs, ys);
   if (!(area > 1e-12 * size * size) && (!pair || allCollinear(zs, ys, size))) {
-    found.add("polygon-degenerate", [...path, "points"], "The polygon encloses no area; give corner points around the part.", { area });
+    found.add("polygon-degenerate", [...path, "points"], "The polygon encloses no area (its points are collinear or coincide); give corner points that enclose the part.", { area });
     return;
   }
   if (pair) {
     found.add(
       "polygon-self-intersecting",
       [...path, "points"],
-      `The outline crosses or touches itself (edges from points ${pair[0]} and ${pair[1]}); list the points in order around the part.`,
+      `The polygon's boundary crosses or touches itself (edges starting at points ${pair[0]} and ${pair[1]} of the cleaned list); give the points in order around a simple outline.`,
       { edges: pair },
     );
   }
@@ -149,7 +149,7 @@ function checkFields(found: IssueCollector, value: Record<string, unknown>, know
 export function validatePart(found: IssueCollector, part: unknown, path: IssuePath): boolean {
   const before = found.issues.length;
   if (!isObject(part)) {
-    found.add("part-invalid", path, `A part must be an object with a kind; got ${describeValue(part)}.`);
+    found.add("part-invalid", path, `A part must be an object with a kind ("polygon", "circle", "sector" or "fillet"); got ${describeValue(part)}.`);
     return false;
   }
   const hole = part["hole"];
@@ -173,7 +173,7 @@ export function validatePart(found: IssueCollector, part: unknown, path: IssuePa
       requireFinite(found, part["startAngle"], [...path, "startAngle"], "start angle");
       const sweep = part["sweep"];
       if (requireFinite(found, sweep, [...path, "sweep"], "sweep") && !(sweep > 0 && sweep <= 2 * Math.PI)) {
-        found.add("sector-sweep-out-of-range", [...path, "sweep"], `The sweep must be in (0, 2 pi]; got ${sweep}.`, { sweep });
+        found.add("sector-sweep-out-of-range", [...path, "sweep"], `A sector's sweep must be greater than 0 and at most 2 pi radians; got ${sweep}.`, { sweep });
       }
       break;
     }

@@ -13,7 +13,7 @@ export type { TrapezoidBand, CircleBand, DepthBand, BandCut } from "./bands.js";
 export { cutAt, tryCutAt } from "./bands.js";
 export type { ShearProperties } from "./shear.js";
 export { shearStress, tryShearStress, shearFlow, tryShearFlow } from "./shear.js";
-export type { ShearStressPoint, ShearStressProfile, ShearStressProfileOptions, MaterialShearStress } from "./shear-profile.js";
+export type { ShearStressPoint, ShearStressProfile, ShearStressProfileOptions, MaterialShearStress, PartShearStress } from "./shear-profile.js";
 export { shearStressAt, tryShearStressAt, peakShearStress, tryPeakShearStress, shearStressProfile, tryShearStressProfile } from "./shear-profile.js";
 export type { SectionStressOptions } from "./section-stress.js";
 export {

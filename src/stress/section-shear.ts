@@ -4,7 +4,7 @@
 // material this is V Q / (I b).
 import { firstMomentAbove, type Section, type SectionProperties, type SectionPropertiesOptions } from "../section/index.js";
 import { findPeak, pointAt, type CutSource } from "./shear-peak.js";
-import type { MaterialShearStress, ShearStressPoint } from "./shear-profile.js";
+import type { MaterialShearStress, PartShearStress, ShearStressPoint } from "./shear-profile.js";
 import { sectionLevels } from "./section-points.js";
 import { sectionWidthTerms } from "./section-width-terms.js";
 
@@ -90,14 +90,18 @@ export function sectionPeak(shear: number, cut: SectionCut): ShearStressPoint {
   const materials: MaterialShearStress[] = [];
   for (const g of groups) {
     let best: MaterialShearStress | undefined;
+    const byPart: PartShearStress[] = [];
     for (const i of g.parts) {
       const e = props.parts[i]!.extremes;
       const p = findPeak(shear, source, props.secondMomentZ, [e.bottom, e.top]);
-      const own = materialsAt(cut, p.y, p.stress, [g])[0];
       const stress = g.n * p.stress + 0;
-      if (best === undefined || Math.abs(stress) > Math.abs(best.stress)) best = { modularRatio: g.n, parts: g.parts, y: p.y, width: own?.width ?? 0, stress };
+      byPart.push({ part: i, y: p.y, stress });
+      if (best === undefined || Math.abs(stress) > Math.abs(best.stress)) {
+        const own = materialsAt(cut, p.y, p.stress, [g])[0];
+        best = { modularRatio: g.n, parts: g.parts, y: p.y, width: own?.width ?? 0, stress };
+      }
     }
-    if (best !== undefined) materials.push(best);
+    if (best !== undefined) materials.push({ ...best, byPart });
   }
   return { ...peak, materials };
 }

@@ -1,5 +1,5 @@
 import { IssueCollector, attempt, requireFinite, type Result } from "../errors/index.js";
-import { sectionProperties, type Section, type SectionPropertiesOptions } from "../section/index.js";
+import { connectedPieces, sectionProperties, type Section, type SectionPropertiesOptions } from "../section/index.js";
 import { bendingStressPlane, type BiaxialMoments } from "./biaxial.js";
 import { cornerStresses, type CornerStresses } from "./corners.js";
 import { checkPointsPerBand, profilePoints } from "./shear-peak.js";
@@ -8,6 +8,25 @@ import type { ShearStressPoint, ShearStressProfile } from "./shear-profile.js";
 import { onBoundary } from "./section-boundary.js";
 import { candidatePoints } from "./section-points.js";
 import { checkFibreInside } from "./validate.js";
+
+/**
+ * Records `section-not-connected` when the section is in more than one piece (see
+ * `connectedPieces`): shear passes between separate pieces only through connectors the section
+ * does not describe, so V Q / (I b) holds at no cut that the pieces share, and a gap between
+ * them would read as zero stress.
+ */
+function checkConnected(found: IssueCollector, section: Section): void {
+  if (section.parts.length < 2) return;
+  const pieces = connectedPieces(section);
+  if (pieces.length < 2) return;
+  const list = pieces.map((p) => `[${p.join(", ")}]`).join(", ");
+  found.add(
+    "section-not-connected",
+    ["parts"],
+    `The section is in ${pieces.length} separate pieces (parts ${list}): shear passes between pieces only through connectors the section does not describe, so no shear stress is given. Make the parts meet along an edge, or find the shear stress in each piece as a section of its own.`,
+    { pieces: pieces.map((p) => [...p]) },
+  );
+}
 
 /** Options of the functions that take a section from the section module. */
 export interface SectionStressOptions extends SectionPropertiesOptions {
@@ -29,7 +48,7 @@ export interface SectionStressOptions extends SectionPropertiesOptions {
  * @param y - Height of the cut, up from the section's (transformed) centroid (length).
  * @param options - Reference modulus for a multi-material section.
  * @returns The stress with Q and b.
- * @throws FlexuraError the section module's codes, `fibre-outside-section`, `not-a-number` / `not-finite`.
+ * @throws FlexuraError the section module's codes, `section-not-connected` (parts in separate pieces, see `connectedPieces`), `fibre-outside-section`, `not-a-number` / `not-finite`.
  * @example
  * ```ts
  * sectionShearStressAt(30e3, rectangle({ width: 100, depth: 200 }), 0).stress; // 2.25 = 1.5 V / A
@@ -38,6 +57,7 @@ export interface SectionStressOptions extends SectionPropertiesOptions {
 export function sectionShearStressAt(shear: number, section: Section, y: number, options?: SectionStressOptions): ShearStressPoint {
   const props = sectionProperties(section, options);
   const found = new IssueCollector();
+  checkConnected(found, section);
   requireFinite(found, shear, ["shear"], "shear force");
   if (requireFinite(found, y, ["y"], "cut height y")) checkFibreInside(found, y, props.extremes.top, props.extremes.bottom, ["y"]);
   found.throwIfAny();
@@ -66,7 +86,7 @@ export function trySectionShearStressAt(shear: number, section: Section, y: numb
  * @param section - The section.
  * @param options - Reference modulus; points per band.
  * @returns Points bottom to top (y from the centroid) and the peak.
- * @throws FlexuraError the section module's codes, `points-per-band-invalid`, `not-a-number` / `not-finite`.
+ * @throws FlexuraError the section module's codes, `section-not-connected` (parts in separate pieces, see `connectedPieces`), `points-per-band-invalid`, `not-a-number` / `not-finite`.
  * @example
  * ```ts
  * sectionShearStressProfile(1e4, circle({ diameter: 60 })).peak.stress; // 4 V / (3 A)
@@ -75,6 +95,7 @@ export function trySectionShearStressAt(shear: number, section: Section, y: numb
 export function sectionShearStressProfile(shear: number, section: Section, options?: SectionStressOptions): ShearStressProfile {
   const props = sectionProperties(section, options);
   const found = new IssueCollector();
+  checkConnected(found, section);
   requireFinite(found, shear, ["shear"], "shear force");
   const perBand = checkPointsPerBand(found, options?.pointsPerBand);
   found.throwIfAny();
@@ -114,6 +135,7 @@ export function trySectionShearStressProfile(shear: number, section: Section, op
 export function sectionPeakShearStress(shear: number, section: Section, options?: SectionStressOptions): ShearStressPoint {
   const props = sectionProperties(section, options);
   const found = new IssueCollector();
+  checkConnected(found, section);
   requireFinite(found, shear, ["shear"], "shear force");
   checkPointsPerBand(found, options?.pointsPerBand);
   found.throwIfAny();

@@ -21,6 +21,22 @@ export interface MaterialShearStress {
   readonly width: number;
   /** tau_i = n_i V Q* / (I* b*) (force / length^2), with the sign of V. */
   readonly stress: number;
+  /**
+   * At the peak only: each solid part's own peak, n_i V Q* / (I* b*) of largest magnitude over
+   * the heights from the part's bottom to its top, so that each part can be checked against its
+   * own allowable; the material's `stress` is the largest of them.
+   */
+  readonly byPart?: readonly PartShearStress[];
+}
+
+/** The peak shear stress in one solid part of a multi-material section (over its own heights). */
+export interface PartShearStress {
+  /** The part's index in `section.parts`. */
+  readonly part: number;
+  /** Height of the cut, up from the transformed centroid (length). */
+  readonly y: number;
+  /** tau_i = n_i V Q* / (I* b*) there (force / length^2), with the sign of V. */
+  readonly stress: number;
 }
 
 /** The shear stress at one height of a section. */

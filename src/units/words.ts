@@ -1,5 +1,4 @@
 import type { QuantityKind } from "./kinds.js";
-import { unitSystems } from "./systems.js";
 
 /** Each kind in words, for messages: `"a force per length"`. */
 export const KIND_WORDS: Readonly<Record<QuantityKind, string>> = Object.freeze({
@@ -17,8 +16,23 @@ export const KIND_WORDS: Readonly<Record<QuantityKind, string>> = Object.freeze(
   dimensionless: "a plain number",
 });
 
-/** The units the presets use for a kind, for messages: `"m, mm, ft or in"`. */
+/** A few units of each kind, for messages. */
+const KIND_EXAMPLES: Readonly<Record<QuantityKind, string>> = Object.freeze({
+  length: "m, mm, in or ft",
+  force: "N, kN, lbf or kip",
+  moment: "kN*m, N*mm, kip*ft or kip*in",
+  forcePerLength: "kN/m, N/mm, kip/ft or lbf/in",
+  stress: "MPa, GPa, N/mm^2, psi or ksi",
+  area: "mm^2, m^2 or in^2",
+  secondMoment: "mm^4, m^4 or in^4",
+  sectionModulus: "mm^3, m^3 or in^3",
+  translationalStiffness: "kN/m, N/mm or kip/in",
+  rotationalStiffness: "kN*m/rad or kip*in/rad",
+  rotation: "rad, or no unit",
+  dimensionless: "no unit",
+});
+
+/** A few units of a kind, for messages: `"m, mm, in or ft"`. */
 export function kindExamples(kind: QuantityKind): string {
-  const units = [...new Set(Object.values(unitSystems).map((system) => system[kind]))].filter((u) => u !== "");
-  return units.length > 1 ? `${units.slice(0, -1).join(", ")} or ${units[units.length - 1] ?? ""}` : (units[0] ?? "");
+  return KIND_EXAMPLES[kind];
 }

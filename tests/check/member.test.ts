@@ -177,6 +177,64 @@ describe("checkMember: published beam formulas", () => {
     expect(missing.ok || missing.error.code).toBe("part-not-found");
   });
 
+  it("checkMember(flitch beam, uniform load): each part's own shear stress against its own allowable", () => {
+    // Transformed-section derivation (Gere and Goodno, Mechanics of Materials, Sec. 6.3, from memory): with the timber as
+    // the reference material, n = E_steel / E_timber, the two 50 x 200 timbers and the 10 x 200 plate between them form a
+    // rectangle of transformed width b* = 2 x 50 + n x 10 over the full depth h = 200, so at the neutral axis
+    // V Q* / (I* b*) = 1.5 V / (b* h) (rectangle), the stress in the timber, and n times it in the steel. V_max = w L / 2
+    // at the supports of a simple span under uniform load (AISC Steel Construction Manual 15th ed., Table 3-23 case 1,
+    // from memory). Invented member: L = 4 m, w = 10 N/mm; timber E = 12000 N/mm^2, steel E = 200000 N/mm^2.
+    const timber = { name: "timber", elasticModulus: 12_000 };
+    const steel = { name: "steel", elasticModulus: 200_000 };
+    const box = (z0: number, z1: number) => [{ z: z0, y: 0 }, { z: z1, y: 0 }, { z: z1, y: 200 }, { z: z0, y: 200 }];
+    const s = section([
+      { kind: "polygon", points: box(-55, -5), material: timber },
+      { kind: "polygon", points: box(-5, 5), material: steel },
+      { kind: "polygon", points: box(5, 55), material: timber },
+    ]);
+    const ms = memberSection(s);
+    const [L, w] = [4000, 10];
+    const solution = solveBeam(simpleSpan(L, 12_000 * ms.properties.secondMomentZ, w));
+    const v = (w * L) / 2;
+    const n = 200_000 / 12_000;
+    const tauTimber = (1.5 * v) / ((100 + 10 * n) * 200); // 0.5625 N/mm^2
+    const tauSteel = n * tauTimber; // 9.375 N/mm^2
+    const r = checkMember(solution, ms, { shearStressByPart: [1.2, 100, 0.9] });
+    const byPart = r.checks.filter((c) => c.check === "shear-stress");
+    expect(byPart.map((c) => c.at.part)).toEqual([0, 1, 2]);
+    expect(byPart[0]!.demand).toBeCloseTo(tauTimber, 9);
+    expect(byPart[1]!.demand).toBeCloseTo(tauSteel, 9);
+    expect(byPart[2]!.utilisation).toBeCloseTo(tauTimber / 0.9, 9);
+    expect(byPart[1]!.utilisation).toBeCloseTo(tauSteel / 100, 9);
+    expect(byPart[1]!.at.y).toBeCloseTo(0, 9);
+    expect(r.governing.at.part).toBe(2);
+    // the peaks in memberStresses: per material and per part, and `shear` the largest material's own stress
+    expect(r.stresses.shearByMaterial.map((m) => [m.modularRatio, m.parts, m.stress])).toEqual([
+      [1, [0, 2], expect.closeTo(tauTimber, 9)],
+      [n, [1], expect.closeTo(tauSteel, 9)],
+    ]);
+    expect(r.stresses.shearByPart.map((p) => p.part)).toEqual([0, 1, 2]);
+    expect(r.stresses.shear!.stress).toBeCloseTo(tauSteel, 9);
+    expect(Math.abs(r.stresses.shear!.shear)).toBeCloseTo(v, 6);
+    // one allowable for the whole section is checked against the largest material's own stress, not the transformed one
+    const one = checkMember(solution, ms, { shearStress: 5 });
+    expect(one.checks[0]!.demand).toBeCloseTo(tauSteel, 9);
+    expect(one.pass).toBe(false);
+    // a part with no allowable is not checked; a part that is not there, or a section without materials, is refused
+    expect(checkMember(solution, ms, { shearStressByPart: [null, 100] }).checks.map((c) => c.at.part)).toEqual([1]);
+    const missing = tryCheckMember(solution, rectangleSection(100, 100), { shearStressByPart: [1] });
+    expect(missing.ok || missing.error.code).toBe("part-not-found");
+    const unknown = tryCheckMember(solution, ms, { shearStressByPart: [1, 1, 1, 1] });
+    expect(unknown.ok || unknown.error.issues.map((i) => [i.code, i.path])).toEqual([["part-not-found", ["limits", "shearStressByPart", 3]]]);
+    const bad = tryCheckMember(solution, ms, { shearStressByPart: [0, "x"] as never });
+    expect(bad.ok || bad.error.issues.map((i) => i.path.join("."))).toEqual(["limits.shearStressByPart.0", "limits.shearStressByPart.1"]);
+    const notList = tryCheckMember(solution, ms, { shearStressByPart: 3 as never });
+    expect(notList.ok || notList.error.code).toBe("not-a-list");
+    // one material: no per-material peaks
+    const plain = memberStresses(solution, memberSection(rectangle({ width: 100, depth: 200 })));
+    expect([plain.shearByMaterial, plain.shearByPart]).toEqual([[], []]);
+  });
+
   it("spanDeflections measures a settled span from its chord", () => {
     const solution = solveBeam({ length: 5000, stiffness: 1e12, supports: [{ kind: "pin", at: 0 }, { kind: "roller", at: 5000, settlement: 10 }], loads: [] });
     expect(Math.abs(spanDeflections(solution)[0]!.deflection)).toBeLessThan(1e-9);

@@ -76,8 +76,14 @@ describe("analyzeModel", () => {
     const [b, d] = [90, 240];
     // Gere and Goodno, Mechanics of Materials: I = b d^3 / 12, S = b d^2 / 6, tau_max = 3 V / (2 A) for a rectangle (common practice).
     near(a.section!.secondMomentZ, (b * d ** 3) / 12, 1e-12);
-    near(a.section!.sectionModulusTop, (b * d * d) / 6, 1e-12);
+    near(a.section!.sectionModulus.top, (b * d * d) / 6, 1e-12);
     near(a.section!.area, b * d, 1e-12);
+    // one vocabulary and frame with sectionProperties: extremes as signed y from the centroid, sectionModulus nested
+    expect([a.section!.extremes, a.section!.sectionModulus.bottom]).toEqual([{ top: 120, bottom: -120 }, expect.closeTo((b * d * d) / 6, 6)]);
+    const json = JSON.parse(JSON.stringify(analysisToJson(a))) as { section: Record<string, unknown> };
+    expect(Object.keys(json.section)).toEqual(["shape", "area", "centroid", "secondMomentZ", "secondMomentY", "productMoment", "extremes", "sectionModulus"]);
+    // the names before 0.1 still read, as aliases left out of the JSON
+    expect([a.section!.yTop, a.section!.yBottom, a.section!.sectionModulusTop, a.section!.productMomentYZ]).toEqual([120, 120, a.section!.sectionModulus.top, a.section!.productMoment]);
     const M = (12 * 36) / 8; // kN*m
     near(a.stress!.tension.value, (M * 1e6) / ((b * d * d) / 6), 1e-10); // MPa
     near(a.stress!.tension.y, -120, 1e-12);

@@ -98,7 +98,7 @@ describe("parseModel", () => {
       [
         "supports[0].type [not-an-option] Expected one of "pin", "roller", "fixed", "guided", "spring"; got "pinned".",
         "loads[1].at [load-outside-member] The load at 7.5 m is outside the member, which runs from 0 to 6 m.",
-        "loads[2].start [wrong-dimension] "3 kN" is a force, but a force per length is due here; use a unit such as N/m, kN/m, N/mm, kip/ft or kip/in.",
+        "loads[2].start [wrong-dimension] "3 kN" is a force, but a force per length is due here; use a unit such as kN/m, N/mm, kip/ft or lbf/in.",
       ]
     `);
   });

@@ -48,10 +48,10 @@ describe("analyzeModel with a section", () => {
     const yc = parts.reduce((s, p) => s + p.A * p.y, 0) / area;
     const I = parts.reduce((s, p) => s + p.I + p.A * (p.y - yc) ** 2, 0);
     near(tee.section!.area, area);
-    near(tee.section!.yBottom, yc);
-    near(tee.section!.yTop, 200 - yc);
+    near(tee.section!.extremes.bottom * -1, yc);
+    near(tee.section!.extremes.top, 200 - yc);
     near(tee.section!.secondMomentZ, I);
-    near(tee.section!.sectionModulusBottom, I / yc);
+    near(tee.section!.sectionModulus.bottom, I / yc);
     // Under hogging the top (flange) is in tension, the bottom of the stem in compression.
     near(tee.stress!.compression.value, -(40e6 * yc) / I);
     near(tee.stress!.compression.y, -yc);
@@ -69,7 +69,7 @@ describe("analyzeModel with a section", () => {
     ];
     const gA = g.reduce((s, p) => s + p.A, 0);
     const gy = g.reduce((s, p) => s + p.A * p.y, 0) / gA;
-    near(girder.section!.yBottom, gy);
+    near(girder.section!.extremes.bottom * -1, gy);
     near(girder.section!.secondMomentZ, g.reduce((s, p) => s + p.I + p.A * (p.y - gy) ** 2, 0));
     expect(girder.checks.map((c) => c.kind)).toEqual(["bending-tension", "bending-compression", "shear-stress"]);
   });

@@ -42,7 +42,7 @@ describe("unit re-expression of the section shapes", () => {
   test.prop([physicalMember, sectionInMm], { numRuns: 80 })("SI and US files of the same shape agree on properties, stresses and checks", (member, section) => {
     const inSI = analyzeModel(parseModel(withSection(writeMember(member, "siKilonewtonMetre"), section, member.E)));
     const inUS = analyzeModel(parseModel(withSection(writeMember(member, "usKipInch"), inInches(section), member.E)));
-    const props = (a: ModelAnalysis) => [a.section!.area * a.scale.area, a.section!.secondMomentZ * a.scale.secondMoment, a.section!.secondMomentY * a.scale.secondMoment, a.section!.yTop * a.scale.sectionLength];
+    const props = (a: ModelAnalysis) => [a.section!.area * a.scale.area, a.section!.secondMomentZ * a.scale.secondMoment, a.section!.secondMomentY * a.scale.secondMoment, a.section!.extremes.top * a.scale.sectionLength];
     props(inUS).forEach((v, i) => expect(Math.abs(v - props(inSI)[i]!)).toBeLessThanOrEqual(1e-9 * Math.abs(props(inSI)[i]!)));
     const stresses = (a: ModelAnalysis) => [a.stress!.tension.value, a.stress!.compression.value].map((v) => v * a.scale.stress);
     const big = Math.max(...stresses(inSI).map(Math.abs), 1e-6);

@@ -1,6 +1,7 @@
 import { describe, expect, it } from "vitest";
 import { formatPath } from "../../src/errors/index.js";
 import { analyzeModel, modelToJson, parseModel, tryAnalyzeModel, tryParseModel, type ModelAnalysis } from "../../src/model/index.js";
+import { reportSection } from "../../src/report/index.js";
 
 /** |a - b| <= rel |b| */
 const within = (a: number, b: number, rel: number): void => {
@@ -37,7 +38,7 @@ describe("channel sections against tabulated rolled channels", () => {
     const a = us({ shape: "channel", depth: d, flangeWidth: bf, flangeThickness: tf, webThickness: tw });
     within(a.section!.area, A, 0.01);
     within(a.section!.secondMomentZ, Ix, 0.01);
-    within(a.section!.sectionModulusTop, Sx, 0.01);
+    within(a.section!.sectionModulus.top, Sx, 0.01);
     expect(a.section!.centroid.y).toBeCloseTo(0, 12); // symmetric about the bending axis
     expect(a.warnings).toEqual([]);
   });
@@ -49,9 +50,9 @@ describe("angle sections against tabulated rolled angles", () => {
     // AISC Steel Construction Manual 15th ed., Table 1-7 (angles), from memory: A = 4.75 in^2, y = 1.99 in,
     // x = 0.987 in, I_x = 17.4 in^4, S_x = 4.33 in^3, I_y = 6.27 in^4 (toe and root radii not modelled).
     within(a.section!.area, 4.75, 0.002);
-    within(a.section!.yBottom, 1.99, 0.005);
+    within(a.section!.extremes.bottom * -1, 1.99, 0.005);
     within(a.section!.secondMomentZ, 17.4, 0.005);
-    within(a.section!.sectionModulusTop, 4.33, 0.005);
+    within(a.section!.sectionModulus.top, 4.33, 0.005);
     within(a.section!.secondMomentY, 6.27, 0.005);
     // The centroid lies x = 0.987 in from the back of the vertical leg; the model's angle has its bounding box centred.
     within(a.section!.centroid.z + 2, 0.987, 0.005);
@@ -62,7 +63,7 @@ describe("angle sections against tabulated rolled angles", () => {
     const a = us({ shape: "angle", verticalLeg: 4, thickness: 0.5 });
     // AISC Steel Construction Manual 15th ed., Table 1-7, from memory: A = 3.75 in^2, y = 1.18 in, I_x = 5.52 in^4.
     within(a.section!.area, 3.75, 0.002);
-    within(a.section!.yBottom, 1.18, 0.005);
+    within(a.section!.extremes.bottom * -1, 1.18, 0.005);
     within(a.section!.secondMomentZ, 5.52, 0.01);
     expect(a.section!.secondMomentY).toBeCloseTo(a.section!.secondMomentZ, 10); // equal legs
   });
@@ -77,7 +78,7 @@ describe("rectangular hollow sections", () => {
     const I = (B * D ** 3 - b * d ** 3) / 12;
     within(a.section!.area, B * D - b * d, 1e-12);
     within(a.section!.secondMomentZ, I, 1e-12);
-    within(a.section!.sectionModulusTop, I / (D / 2), 1e-12);
+    within(a.section!.sectionModulus.top, I / (D / 2), 1e-12);
     // tau = V Q / (I b) with Q of the half section above the neutral axis (common practice).
     const Q = (B * D ** 2) / 8 - (b * d ** 2) / 8;
     within(a.stress!.shear!.value, (5e3 * Q) / (I * 2 * t), 1e-9);
@@ -93,7 +94,7 @@ describe("rectangular hollow sections", () => {
     const a = us({ shape: "rectangular-hollow", width: B, depth: D, wallThickness: t, cornerRadius: 2 * t });
     within(a.section!.area, A, 0.005);
     within(a.section!.secondMomentZ, Ix, 0.005);
-    within(a.section!.sectionModulusTop, Sx, 0.005);
+    within(a.section!.sectionModulus.top, Sx, 0.005);
     within(a.section!.secondMomentY, Iy, 0.005);
   });
 });
@@ -110,7 +111,7 @@ describe("plate girders", () => {
     const area = parts.reduce((s, p) => s + p.A, 0);
     const yc = parts.reduce((s, p) => s + p.A * p.y, 0) / area;
     within(a.section!.area, area, 1e-12);
-    within(a.section!.yBottom, yc, 1e-12);
+    within(a.section!.extremes.bottom * -1, yc, 1e-12);
     within(a.section!.secondMomentZ, parts.reduce((s, p) => s + p.I + p.A * (p.y - yc) ** 2, 0), 1e-12);
   });
 
@@ -195,6 +196,25 @@ describe("built-up sections", () => {
     const unchecked = si(flitch({ modularRatio: n }), { ...timber, limits: { bendingStress: 10 } });
     expect(unchecked.checks.map((c) => c.description.replace(/ against.*/, ""))).toEqual([0, 0, 2, 2].map((p, i) => `extreme-fibre bending stress (${i % 2 === 0 ? "tension" : "compression"}) in part ${p}`));
     expect(unchecked.warnings.map((w) => w.code)).toEqual(["part-bending-stress-not-checked"]);
+    // Shear, each material against its own allowable: by the transformed-section derivation (Gere and Goodno, Mechanics of
+    // Materials, Sec. 6.3, from memory) the cut at the neutral axis carries V Q* / (I* b*) = 1.5 V / (b* h) in the timber,
+    // b* = 100 + 10 n, and n times that in the plate; V = P / 2 = 5 kN beside the midspan load.
+    const tauTimber = (1.5 * 5e3) / ((100 + 10 * n) * 300);
+    const sheared = si(flitch({ material: { E: "200 GPa" }, shearStress: "100 MPa" }), { ...timber, limits: { shearStress: 1 } });
+    expect(sheared.checks.map((c) => [c.description, c.part])).toEqual([
+      ["peak shear stress in part 0 against 1 MPa", 0],
+      ["peak shear stress in part 1 against 100 MPa", 1],
+      ["peak shear stress in part 2 against 1 MPa", 2],
+    ]);
+    within(sheared.checks[0]!.demand, tauTimber, 1e-9);
+    within(sheared.checks[1]!.demand, n * tauTimber, 1e-9);
+    within(sheared.stress!.shear!.value, n * tauTimber, 1e-9);
+    expect(sheared.stress!.shearByPart!.map((p) => p.part)).toEqual([0, 1, 2]);
+    within(sheared.stress!.shearByPart![2]!.value, tauTimber, 1e-9);
+    const shearUnchecked = si(flitch({ material: { E: "200 GPa" } }), { ...timber, limits: { shearStress: 1 } });
+    expect(shearUnchecked.checks.map((c) => c.part)).toEqual([0, 2]);
+    expect(shearUnchecked.warnings.map((w) => w.code)).toEqual(["part-shear-stress-not-checked"]);
+    expect(reportSection(sheared)).toMatch(/largest shear stress, part 1\s+1\.61\d* MPa/);
   });
 });
 

@@ -54,8 +54,8 @@ describe("the report draws every section shape of the model format", () => {
     // Sagging: the reference material's profile -M y / I_t runs from tension at the bottom to compression at the top (common practice).
     const labels = [...svg.matchAll(/>(-?[0-9.]+) MPa</g)].map((m) => Number(m[1]));
     const s = analysis.section!;
-    const bottom = (10e6 * s.yBottom) / s.secondMomentZ; // M = P L / 4 = 10 kN*m (AISC Manual 15th ed., Table 3-23 case 7), sigma = M y / I_t
-    const top = (-10e6 * s.yTop) / s.secondMomentZ;
+    const bottom = (10e6 * (-s.extremes.bottom)) / s.secondMomentZ; // M = P L / 4 = 10 kN*m (AISC Manual 15th ed., Table 3-23 case 7), sigma = M y / I_t
+    const top = (-10e6 * s.extremes.top) / s.secondMomentZ;
     expect(labels.some((v) => Math.abs(v - bottom) <= 1e-3 * bottom)).toBe(true);
     expect(labels.some((v) => Math.abs(v - top) <= -1e-3 * top)).toBe(true);
     expect(textReport(analysis)).toContain("Section: built-up (6 parts, 1 of them hole)");

@@ -118,7 +118,7 @@ describe("bad input gives typed errors", () => {
         {
           "code": "unit-missing",
           "expected": "force",
-          "message": ""12" has no unit; a force is due here, so add a unit such as N, kN or kip.",
+          "message": ""12" has no unit; a force is due here, so add a unit such as N, kN, lbf or kip.",
           "path": [],
           "text": "12",
         },
@@ -390,6 +390,8 @@ describe("bad input gives typed errors", () => {
         },
       ]
     `);
+    // near spellings by edit distance with adjacent swaps, nearest first
+    expect((bad("12 kpi") as { suggestions?: unknown }[])[0]?.suggestions).toEqual(["kip", "kPa", "ksi"]);
     expect(bad("12 kipf")).toMatchInlineSnapshot(`
       [
         {
@@ -436,7 +438,7 @@ describe("bad input gives typed errors", () => {
           "found": [
             "length",
           ],
-          "message": ""5 mm" is a length, but a force is due here; use a unit such as N, kN or kip.",
+          "message": ""5 mm" is a length, but a force is due here; use a unit such as N, kN, lbf or kip.",
           "path": [],
           "unit": "mm",
         },
@@ -451,7 +453,7 @@ describe("bad input gives typed errors", () => {
           "found": [
             "rotationalStiffness",
           ],
-          "message": ""5 kN*m/rad" is a rotational stiffness, but a moment is due here; use a unit such as N*m, kN*m, N*mm, kip*ft or kip*in.",
+          "message": ""5 kN*m/rad" is a rotational stiffness, but a moment is due here; use a unit such as kN*m, N*mm, kip*ft or kip*in.",
           "path": [],
           "unit": "kN*m/rad",
         },
@@ -464,7 +466,7 @@ describe("bad input gives typed errors", () => {
           "dimension": "length^7",
           "expected": "length",
           "found": [],
-          "message": ""5 m^7" has dimension length^7, but a length is due here; use a unit such as m, mm, ft or in.",
+          "message": ""5 m^7" has dimension length^7, but a length is due here; use a unit such as m, mm, in or ft.",
           "path": [],
           "unit": "m^7",
         },
@@ -622,7 +624,7 @@ describe("bad input gives typed errors", () => {
           "found": [
             "length",
           ],
-          "message": "The unit "mm" is a length, but a force is due here; use a unit such as N, kN or kip.",
+          "message": "The unit "mm" is a length, but a force is due here; use a unit such as N, kN, lbf or kip.",
           "path": [
             "toUnit",
           ],
@@ -639,7 +641,7 @@ describe("bad input gives typed errors", () => {
           "found": [
             "length",
           ],
-          "message": "The unit "mm" is a length, but a force is due here; use a unit such as N, kN or kip.",
+          "message": "The unit "mm" is a length, but a force is due here; use a unit such as N, kN, lbf or kip.",
           "path": [
             "toUnit",
           ],

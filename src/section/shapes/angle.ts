@@ -47,9 +47,9 @@ export function angle(dims: AngleDimensions, options?: ShapeOptions): Section {
   const t = dims.thickness;
   const r = dims.rootRadius ?? 0;
   if (t >= Math.min(h, w)) {
-    found.add("thickness-too-large", ["thickness"], `The thickness must be less than both legs.`, { thickness: t });
+    found.add("thickness-too-large", ["thickness"], `The thickness (${t}) must be less than both legs (${Math.min(h, w)}).`, { thickness: t });
   } else if (r > Math.min(h, w) - t) {
-    found.add("root-radius-too-large", ["rootRadius"], `The root radius must fit along both legs.`, { rootRadius: r });
+    found.add("root-radius-too-large", ["rootRadius"], `The root radius (${r}) must fit along both legs (at most ${Math.min(h, w) - t}).`, { rootRadius: r });
   }
   found.throwIfAny();
   const m = options?.material;

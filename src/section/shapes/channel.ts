@@ -45,10 +45,10 @@ export function channel(dims: ChannelDimensions, options?: ShapeOptions): Sectio
   if (!ok) found.throwIfAny();
   const { depth: d, flangeWidth: b, flangeThickness: tf, webThickness: tw } = dims;
   const r = dims.rootRadius ?? 0;
-  if (2 * tf >= d) found.add("flange-too-thick", ["flangeThickness"], `The flanges together must be thinner than the depth.`, { flangeThickness: tf, depth: d });
-  if (tw >= b) found.add("web-too-thick", ["webThickness"], `The web must be thinner than the flange width.`, { webThickness: tw });
+  if (2 * tf >= d) found.add("flange-too-thick", ["flangeThickness"], `The two flanges (2 x ${tf}) must together be thinner than the depth (${d}).`, { flangeThickness: tf, depth: d });
+  if (tw >= b) found.add("web-too-thick", ["webThickness"], `The web (${tw}) must be thinner than the flange width (${b}).`, { webThickness: tw });
   if (found.empty && (tw + r > b || 2 * r > d - 2 * tf)) {
-    found.add("root-radius-too-large", ["rootRadius"], `The root radius must fit along the flanges and the web.`, { rootRadius: r });
+    found.add("root-radius-too-large", ["rootRadius"], `The root radius (${r}) must fit along the flanges and within the clear depth of the web.`, { rootRadius: r });
   }
   found.throwIfAny();
   const m = options?.material;

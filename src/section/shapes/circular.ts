@@ -66,7 +66,7 @@ export function pipe(dims: PipeDimensions, options?: ShapeOptions): Section {
   checkShapeOptions(found, options);
   if (!ok) found.throwIfAny();
   if (dims.wallThickness * 2 >= dims.outsideDiameter) {
-    found.add("wall-too-thick", ["wallThickness"], `The wall must be thinner than half the diameter; for a solid bar use circle().`, {
+    found.add("wall-too-thick", ["wallThickness"], `The wall (${dims.wallThickness}) must be thinner than half the outside diameter (${dims.outsideDiameter}); for a solid bar use circle().`, {
       wallThickness: dims.wallThickness,
       outsideDiameter: dims.outsideDiameter,
     });

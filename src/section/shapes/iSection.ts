@@ -80,13 +80,13 @@ export function iSection(dims: ISectionDimensions, options?: ShapeOptions): Sect
   const r = dims.rootRadius ?? 0;
   {
     if (tt + tb >= d) {
-      found.add("flange-too-thick", ["flangeThickness"], `The flanges together must be thinner than the depth.`, { flangeThickness: tt, bottomFlangeThickness: tb, depth: d });
+      found.add("flange-too-thick", ["flangeThickness"], `The flanges (${tt} + ${tb}) must together be thinner than the depth (${d}).`, { flangeThickness: tt, bottomFlangeThickness: tb, depth: d });
     }
     if (tw > Math.min(bt, bb)) {
-      found.add("web-too-thick", ["webThickness"], `The web must not be wider than the flanges.`, { webThickness: tw });
+      found.add("web-too-thick", ["webThickness"], `The web (${tw}) must not be wider than the flanges (${Math.min(bt, bb)}).`, { webThickness: tw });
     }
     if (found.empty && r > 0 && (tw + 2 * r > Math.min(bt, bb) || 2 * r > d - tt - tb)) {
-      found.add("root-radius-too-large", ["rootRadius"], `The root radius must fit between web, flange tips and the other flange.`, { rootRadius: r });
+      found.add("root-radius-too-large", ["rootRadius"], `The root radius (${r}) must fit between the web and the flange tips and within the clear depth of the web.`, { rootRadius: r });
     }
   }
   found.throwIfAny();

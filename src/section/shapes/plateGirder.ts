@@ -68,7 +68,7 @@ export function plateGirder(dims: PlateGirderDimensions, options?: ShapeOptions)
   const web = dims.web;
   const bottom = dims.bottomFlange ?? top;
   if (web.thickness > Math.min(top.width, bottom.width)) {
-    found.add("web-too-thick", ["web", "thickness"], `The web must not be wider than the flanges.`, { webThickness: web.thickness });
+    found.add("web-too-thick", ["web", "thickness"], `The web (${web.thickness}) must not be wider than the flanges (${Math.min(top.width, bottom.width)}).`, { webThickness: web.thickness });
   }
   found.throwIfAny();
   const m = options?.material;

@@ -48,12 +48,12 @@ export function rectangularHollow(dims: RectangularHollowDimensions, options?: S
   const ro = dims.cornerRadius ?? 0;
   const ri = dims.innerCornerRadius ?? Math.max(0, ro - t);
   if (2 * t >= Math.min(b, d)) {
-    found.add("wall-too-thick", ["wallThickness"], `The wall must be thinner than half the width and depth.`, { wallThickness: t });
+    found.add("wall-too-thick", ["wallThickness"], `The wall (${t}) must be thinner than half the width and half the depth (${Math.min(b, d) / 2}).`, { wallThickness: t });
   } else if (2 * ri > Math.min(b, d) - 2 * t) {
-    found.add("corner-radius-too-large", ["innerCornerRadius"], `The inside corner radius must be at most half the inside width and depth.`, { innerCornerRadius: ri });
+    found.add("corner-radius-too-large", ["innerCornerRadius"], `The inside corner radius (${ri}) must be at most half the inside width and depth (${(Math.min(b, d) - 2 * t) / 2}).`, { innerCornerRadius: ri });
   }
   if (2 * ro > Math.min(b, d)) {
-    found.add("corner-radius-too-large", ["cornerRadius"], `The corner radius must be at most half the width and depth.`, { cornerRadius: ro });
+    found.add("corner-radius-too-large", ["cornerRadius"], `The outside corner radius (${ro}) must be at most half the width and depth (${Math.min(b, d) / 2}).`, { cornerRadius: ro });
   }
   found.throwIfAny();
   const m = options?.material;

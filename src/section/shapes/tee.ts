@@ -47,10 +47,10 @@ export function tee(dims: TeeDimensions, options?: ShapeOptions): Section {
   const { depth: d, flangeWidth: b, flangeThickness: tf, webThickness: tw } = dims;
   const r = dims.rootRadius ?? 0;
   {
-    if (tf >= d) found.add("flange-too-thick", ["flangeThickness"], `The flange must be thinner than the depth.`, { flangeThickness: tf, depth: d });
-    if (tw > b) found.add("web-too-thick", ["webThickness"], `The stem must not be wider than the flange.`, { webThickness: tw });
+    if (tf >= d) found.add("flange-too-thick", ["flangeThickness"], `The flange (${tf}) must be thinner than the depth (${d}).`, { flangeThickness: tf, depth: d });
+    if (tw > b) found.add("web-too-thick", ["webThickness"], `The stem (${tw}) must not be wider than the flange (${b}).`, { webThickness: tw });
     if (found.empty && r > 0 && (tw + 2 * r > b || r > d - tf)) {
-      found.add("root-radius-too-large", ["rootRadius"], `The root radius must fit between stem and flange tips, and along the stem.`, { rootRadius: r });
+      found.add("root-radius-too-large", ["rootRadius"], `The root radius (${r}) must fit between the stem and the flange tips and within the stem's length.`, { rootRadius: r });
     }
   }
   found.throwIfAny();
