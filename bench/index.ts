@@ -12,6 +12,7 @@ import "./check.bench.js";
 import "./section.bench.js";
 import "./model.bench.js";
 import "./sheet.bench.js";
+import "./combine.bench.js";
 import "./design.bench.js";
 
 const pattern = process.argv[2];

@@ -158,7 +158,9 @@ export function solveCases(beam: BeamInput, cases: readonly LoadCase[], options?
   const casesOk = checkCases(found, cases, ["cases"]);
   found.throwIfAny();
   const b = beam as unknown as Record<string, unknown>;
-  if (!Array.isArray(b["supports"]) || !(b["loads"] === undefined || Array.isArray(b["loads"]))) memberProblems(beam);
+  const isObject = (x: unknown): boolean => typeof x === "object" && x !== null;
+  if (!Array.isArray(b["supports"]) || !(b["loads"] === undefined || Array.isArray(b["loads"])) || !(b["supports"] as unknown[]).every(isObject) || !((b["loads"] ?? []) as unknown[]).every(isObject))
+    memberProblems(beam);
   if (!casesOk) found.throwIfAny();
   const names = cases.map((c) => c.name);
   const settlementCase = options?.settlementCase;
@@ -168,8 +170,8 @@ export function solveCases(beam: BeamInput, cases: readonly LoadCase[], options?
   const byCase = new Map<string, Load[]>(names.map((n) => [n, []]));
   loads.forEach((l, i) => {
     const name = l.case ?? DEFAULT_LOAD_CASE;
-    const list = byCase.get(name);
-    if (list === undefined) found.add("unknown-case", ["beam", "loads", i, "case"], `The load names the case "${name}", which is not among the load cases.${unknownKeyHint(name, names)}`, { name });
+    const list = typeof name === "string" ? byCase.get(name) : undefined;
+    if (list === undefined) found.add("unknown-case", ["beam", "loads", i, "case"], `The load names the case ${describeValue(name)}, which is not among the load cases.${typeof name === "string" ? unknownKeyHint(name, names) : ""}`, { name: describeValue(name) });
     else list.push(l);
   });
   const moves = beam.supports.some((s) => (s.settlement ?? 0) !== 0 || (s.rotation ?? 0) !== 0);

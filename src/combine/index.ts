@@ -11,3 +11,9 @@ export type { SolveCasesOptions, DiagramCoefficients, CasePart, CombineWarning, 
 export { solveCases, trySolveCases } from "./case-solutions.js";
 export type { SpanPattern, CombinedResult } from "./superpose.js";
 export { combineCases } from "./superpose.js";
+export type { PatternOptions, LoadArrangement } from "./patterns.js";
+export { arrangementsOf, MAX_PATTERN_CAP, MAX_ARRANGEMENTS } from "./patterns.js";
+export type { GoverningValue, EnvelopeBound, DiagramEnvelope } from "./envelope.js";
+export { envelopeOfDiagram } from "./envelope.js";
+export type { GoverningReaction, ReactionRange, ReactionEnvelope, EnvelopeOptions, Envelopes } from "./envelopes.js";
+export { envelopes, tryEnvelopes } from "./envelopes.js";

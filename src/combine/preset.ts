@@ -53,6 +53,8 @@ const OPTION_KEYS: Readonly<Record<PresetName, readonly string[]>> = Object.free
   "en1990-strength": ["map", "loadsNotActing", "expression", "imposedCategory", "snowSite"],
   "en1990-serviceability": ["map", "loadsNotActing", "imposedCategory", "snowSite"],
 });
+const ASCE_STRENGTH_COVERS = categoriesOf(ASCE7_16_STRENGTH);
+const ASCE_ALLOWABLE_COVERS = categoriesOf(ASCE7_16_ALLOWABLE_STRESS);
 const EN_COVERS: ReadonlySet<CaseCategory> = new Set<CaseCategory>(["dead", "live", "roof-live", "snow", "wind", "seismic"]);
 const EN_IMPOSED = ["A", "B", "C", "D", "E", "F", "G"];
 const EN_SNOW = ["up-to-1000m", "above-1000m", "nordic"];
@@ -93,7 +95,7 @@ export function presetCombinations(preset: PresetName, cases: readonly LoadCase[
   const opts = checkOptions(found, preset, options, casesOk ? cases : []);
   found.throwIfAny();
   const categoryOf = (c: LoadCase): CaseCategory => opts.map?.[c.name] ?? c.category;
-  const covered: ReadonlySet<CaseCategory> = preset.startsWith("asce") ? categoriesOf(preset === "asce7-16-strength" ? ASCE7_16_STRENGTH : ASCE7_16_ALLOWABLE_STRESS) : EN_COVERS;
+  const covered: ReadonlySet<CaseCategory> = preset === "asce7-16-strength" ? ASCE_STRENGTH_COVERS : preset === "asce7-16-allowable-stress" ? ASCE_ALLOWABLE_COVERS : EN_COVERS;
   cases.forEach((c, i) => {
     const category = categoryOf(c);
     if (!covered.has(category))
@@ -111,7 +113,7 @@ export function presetCombinations(preset: PresetName, cases: readonly LoadCase[
   if (preset === "asce7-16-strength" || preset === "asce7-16-allowable-stress") {
     const rows = preset === "asce7-16-strength" ? ASCE7_16_STRENGTH : ASCE7_16_ALLOWABLE_STRESS;
     purpose = preset === "asce7-16-strength" ? "strength" : "allowable-stress";
-    named = categoriesOf(rows);
+    named = covered;
     drafts = asceDrafts(rows, byCategory, opts.liveFactorException === true, notes);
   } else {
     const psiOf = (category: CaseCategory): CombinationFactors => psiFor(category, opts.imposedCategory ?? "A", opts.snowSite ?? "up-to-1000m");

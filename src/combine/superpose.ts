@@ -1,7 +1,7 @@
-import type { Reaction } from "../beam/index.js";
+import type { BeamSpan, Reaction } from "../beam/index.js";
 import { describeValue, fail, IssueCollector, requireFinite, unknownKeyHint } from "../errors/index.js";
 import { makePiecewise, type PiecewisePolynomial } from "../math/piecewise.js";
-import { DEGREES, type CaseSolutions, type DiagramName } from "./case-solutions.js";
+import { DEGREES, type CasePart, type CaseSolutions, type DiagramName } from "./case-solutions.js";
 import { isRecord } from "./validate.js";
 
 /**
@@ -10,8 +10,16 @@ import { isRecord } from "./validate.js";
  */
 export type SpanPattern = Readonly<Record<string, readonly number[]>>;
 
-/** A combination formed by superposition: reactions and the four diagrams, exact piecewise polynomials. */
+/**
+ * A combination formed by superposition: reactions and the four diagrams, exact piecewise
+ * polynomials, with the member's length and spans: what the member checks of `flexura/check` read
+ * (`checkMember(combined, sections, limits)` checks one combination).
+ */
 export interface CombinedResult {
+  /** Member length (length units). */
+  readonly length: number;
+  /** The spans and cantilevers, left to right. */
+  readonly spans: readonly BeamSpan[];
   /** One reaction per support, in the member's order: force up positive, moment counterclockwise positive. */
   readonly reactions: readonly Reaction[];
   /** Shear V(x) (force units), degree 2. */
@@ -49,14 +57,23 @@ export function partWeights(solved: CaseSolutions, factors: unknown, pattern?: u
       }
   }
   found.throwIfAny();
-  const f = factors as Readonly<Record<string, number>>;
-  const p = pattern as SpanPattern | undefined;
-  return Float64Array.from(solved.parts, (part) => {
-    const factor = f[part.case] ?? 0;
-    if (part.span === undefined || p === undefined) return factor;
-    const loaded = p[part.case];
-    return loaded === undefined || loaded.includes(part.span) ? factor : 0;
-  });
+  return weightsFor(solved, factors as Readonly<Record<string, number>>, pattern as SpanPattern | undefined);
+}
+
+/** {@link partWeights} without checks, for factors and a pattern already checked. */
+export function weightsFor(solved: CaseSolutions, factors: Readonly<Record<string, number>>, pattern: SpanPattern | undefined): Float64Array {
+  const parts = solved.parts;
+  const out = new Float64Array(parts.length);
+  for (let i = 0; i < parts.length; i++) {
+    const part = parts[i] as CasePart;
+    const factor = factors[part.case] ?? 0;
+    if (part.span === undefined || pattern === undefined) out[i] = factor;
+    else {
+      const loaded = pattern[part.case];
+      out[i] = loaded === undefined || loaded.includes(part.span) ? factor : 0;
+    }
+  }
+  return out;
 }
 
 /** The coefficients of one diagram for these part weights, on the shared breakpoints, into `out`. */
@@ -117,6 +134,8 @@ export function combineCases(solved: CaseSolutions, factors: Readonly<Record<str
     return makePiecewise(solved.breaks.slice(), out, DEGREES[name]);
   };
   return Object.freeze({
+    length: solved.length,
+    spans: solved.spans,
     reactions: Object.freeze(combineReactions(solved, weights)),
     shear: diagram("shear"),
     moment: diagram("moment"),
