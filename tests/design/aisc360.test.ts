@@ -17,7 +17,7 @@ import {
   tryCheckSteelBeam,
   type IShapeForDesign,
 } from "../../src/design/index.js";
-import { isFlexuraError } from "../../src/errors/index.js";
+import { issueCodes } from "./helpers.js";
 
 const steel50 = { elasticModulus: 29000, yieldStrength: 50 }; // ksi; E = 29,000 ksi (AISC 360-16 B1 / Manual), A992 F_y = 50 ksi
 
@@ -224,18 +224,9 @@ describe("laws (fast-check)", () => {
 
 describe("bad input", () => {
   const member = solveBeam({ length: 100, stiffness: 1e6, supports: [{ kind: "pin", at: 0 }, { kind: "roller", at: 100 }], loads: [{ kind: "point", at: 50, value: 1 }] });
-  const codes = (fn: () => unknown): string[] => {
-    try {
-      fn();
-    } catch (e) {
-      if (isFlexuraError(e)) return e.issues.map((i) => `${i.code}@${i.path.join(".")}`);
-      throw e;
-    }
-    throw new Error("did not throw");
-  };
   it("a shape with a missing, misspelt and negative property: every issue at once", () => {
     const { torsionConstant: _j, ...noJ } = w18x50;
-    expect(codes(() => checkIShape({ ...noJ, warpingconstant: 3, depth: -1 }))).toEqual([
+    expect(issueCodes(() => checkIShape({ ...noJ, warpingconstant: 3, depth: -1 }))).toEqual([
       "unknown-field@shape.warpingconstant",
       "value-not-positive@shape.depth",
       "missing-field@shape.torsionConstant",
@@ -243,20 +234,23 @@ describe("bad input", () => {
   });
   it("a slender web is refused, naming F5: never a strength outside the rule's scope", () => {
     const plate = { ...w18x50, rolled: false, webThickness: 0.1, webHeight: 16 };
-    expect(codes(() => nominalFlexure(plate, steel50, 100, 1))).toEqual(["rule-not-covered@shape.webHeight"]);
+    expect(issueCodes(() => nominalFlexure(plate, steel50, 100, 1))).toEqual(["rule-not-covered@shape.webHeight"]);
     expect(() => nominalFlexure(plate, steel50, 100, 1)).toThrow(/F5/);
   });
   it("no F_y, a brace outside the member, an unknown method", () => {
-    expect(codes(() => checkSteelBeam(member, w18x50, { elasticModulus: 29000 } as never, { method: "lrfd" }))).toEqual(["missing-field@steel.yieldStrength"]);
-    expect(codes(() => checkSteelBeam(member, w18x50, steel50, { method: "lrfd", braces: [150, Number.NaN] }))).toEqual([
+    expect(issueCodes(() => checkSteelBeam(member, w18x50, { elasticModulus: 29000 } as never, { method: "lrfd" }))).toEqual(["missing-field@steel.yieldStrength"]);
+    expect(issueCodes(() => checkSteelBeam(member, w18x50, steel50, { method: "lrfd", braces: [150, Number.NaN] }))).toEqual([
       "brace-outside-member@options.braces.0",
       "not-finite@options.braces.1",
     ]);
     const r = tryCheckSteelBeam(member, w18x50, steel50, { method: "limit" as never });
     expect(r.ok).toBe(false);
   });
+  it("something that is not a solved member", () => {
+    expect(issueCodes(() => checkSteelBeam(null as never, w18x50, steel50, { method: "lrfd" }))).toEqual(["options-invalid@solution"]);
+  });
   it("a non-positive unbraced length or C_b", () => {
-    expect(codes(() => nominalFlexure(w18x50, steel50, 0, 1))).toEqual(["value-not-positive@unbracedLength"]);
-    expect(codes(() => nominalFlexure(w18x50, steel50, 10, Number.NaN))).toEqual(["value-not-positive@momentGradient"]);
+    expect(issueCodes(() => nominalFlexure(w18x50, steel50, 0, 1))).toEqual(["value-not-positive@unbracedLength"]);
+    expect(issueCodes(() => nominalFlexure(w18x50, steel50, 10, Number.NaN))).toEqual(["value-not-positive@momentGradient"]);
   });
 });

@@ -13,7 +13,7 @@ import {
   eurocodeResistance,
   type IShapeForEurocode,
 } from "../../src/design/index.js";
-import { isFlexuraError } from "../../src/errors/index.js";
+import { issueCodes } from "./helpers.js";
 
 const ipe300: IShapeForEurocode = {
   rolled: true,
@@ -110,29 +110,33 @@ describe("laws (fast-check)", () => {
 });
 
 describe("bad input", () => {
-  const codes = (fn: () => unknown): string[] => {
-    try {
-      fn();
-    } catch (e) {
-      if (isFlexuraError(e)) return e.issues.map((i) => `${i.code}@${i.path.join(".")}`);
-      throw e;
-    }
-    throw new Error("did not throw");
-  };
   it("steel in ksi is refused: epsilon needs N/mm^2", () => {
-    expect(codes(() => classifyEurocodeIShape(ipe300, { elasticModulus: 29000, shearModulus: 11200, yieldStrength: 50 }))).toEqual(["units-not-newton-millimetre@steel.elasticModulus"]);
+    expect(issueCodes(() => classifyEurocodeIShape(ipe300, { elasticModulus: 29000, shearModulus: 11200, yieldStrength: 50 }))).toEqual(["units-not-newton-millimetre@steel.elasticModulus"]);
   });
   it("a class 4 section and a web that needs a shear buckling check are refused, naming EN 1993-1-5", () => {
     const thinFlange = { ...ipe300, flangeWidth: 400, flangeThickness: 8 };
-    expect(codes(() => eurocodeResistance(thinFlange, s235))).toEqual(["rule-not-covered@shape"]);
+    expect(issueCodes(() => eurocodeResistance(thinFlange, s235))).toEqual(["rule-not-covered@shape"]);
     const deep = { ...ipe300, depth: 900, webThickness: 6, area: 8600, elasticModulus: 2.0e6, plasticModulus: 2.4e6 };
     expect(() => eurocodeResistance(deep, s235)).toThrow(/EN 1993-1-5/);
   });
   it("missing G, a partial factor below 1, shear above V_pl,Rd, an unknown method", () => {
-    expect(codes(() => criticalMoment(ipe300, { elasticModulus: 210000, yieldStrength: 235 } as never, 5000, { momentShapeFactor: 1 }))).toEqual(["missing-field@steel.shearModulus"]);
-    expect(codes(() => eurocodeResistance(ipe300, s235, { crossSection: 0.9, instability: 1 }))).toEqual(["partial-factor-invalid@factors.crossSection"]);
+    expect(issueCodes(() => criticalMoment(ipe300, { elasticModulus: 210000, yieldStrength: 235 } as never, 5000, { momentShapeFactor: 1 }))).toEqual(["missing-field@steel.shearModulus"]);
+    expect(issueCodes(() => eurocodeResistance(ipe300, s235, { crossSection: 0.9, instability: 1 }))).toEqual(["partial-factor-invalid@factors.crossSection"]);
     const r = eurocodeResistance(ipe300, s235);
-    expect(codes(() => bendingWithShear(ipe300, s235, r, 1.01 * r.shear))).toEqual(["shear-exceeds-resistance@shear"]);
-    expect(codes(() => bucklingResistance(ipe300, s235, 1e8, "lazy" as never))).toEqual(["options-invalid@method"]);
+    expect(issueCodes(() => bendingWithShear(ipe300, s235, r, 1.01 * r.shear))).toEqual(["shear-exceeds-resistance@shear"]);
+    expect(issueCodes(() => bucklingResistance(ipe300, s235, 1e8, "lazy" as never))).toEqual(["options-invalid@method"]);
+  });
+});
+
+describe("bad input that must not give NaN", () => {
+  const code = (fn: () => unknown): string | undefined => issueCodes(fn)[0];
+  const r = eurocodeResistance(ipe300, s235);
+  it("bendingWithShear with V_Ed NaN, resistances that are not numbers, or factors that are null", () => {
+    expect(code(() => bendingWithShear(ipe300, s235, r, Number.NaN))).toBe("not-finite@shear");
+    expect(code(() => bendingWithShear(ipe300, s235, {} as never, 1))).toBe("options-invalid@resistance");
+    expect(code(() => eurocodeResistance(ipe300, s235, null as never))).toBe("partial-factor-invalid@factors");
+  });
+  it("criticalMoment without options", () => {
+    expect(code(() => criticalMoment(ipe300, s235, 5000, null as never))).toBe("options-invalid@options");
   });
 });

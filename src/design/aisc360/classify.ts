@@ -53,8 +53,11 @@ export function flangeBucklingCoefficient(shape: IShapeForDesign): number {
  * ```
  */
 export function classifyIShape(shape: IShapeForDesign, steel: SteelForDesign): IShapeClassification {
-  shape = checkIShape(shape);
-  steel = checkSteel(steel);
+  return classifyCheckedIShape(checkIShape(shape), checkSteel(steel));
+}
+
+/** @internal {@link classifyIShape} on a shape and steel already checked. */
+export function classifyCheckedIShape(shape: IShapeForDesign, steel: SteelForDesign): IShapeClassification {
   const root = Math.sqrt(steel.elasticModulus / steel.yieldStrength);
   const flangeRatio = shape.flangeWidth / (2 * shape.flangeThickness);
   const fp = 0.38 * root;

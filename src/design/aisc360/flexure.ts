@@ -1,7 +1,7 @@
 // Nominal flexural strength of a doubly symmetric I-shape with a compact web bent about its
 // major axis: AISC 360-16 F2 (compact flanges) and F3 (noncompact or slender flanges).
 import { fail } from "../../errors/index.js";
-import { classifyIShape, flangeBucklingCoefficient, type IShapeClassification } from "./classify.js";
+import { classifyCheckedIShape, flangeBucklingCoefficient, type IShapeClassification } from "./classify.js";
 import { checkIShape, checkSteel, type IShapeForDesign, type SteelForDesign } from "./shape.js";
 
 /** The limit state that sets a nominal flexural strength. */
@@ -48,8 +48,10 @@ export interface NominalFlexure {
  * ```
  */
 export function bucklingLengths(shape: IShapeForDesign, steel: SteelForDesign): BucklingLengths {
-  shape = checkIShape(shape);
-  steel = checkSteel(steel);
+  return lengthsOf(checkIShape(shape), checkSteel(steel));
+}
+
+function lengthsOf(shape: IShapeForDesign, steel: SteelForDesign): BucklingLengths {
   const { elasticModulus: E, yieldStrength: Fy } = steel;
   const rts = Math.sqrt(Math.sqrt(shape.minorMomentOfInertia * shape.warpingConstant) / shape.sectionModulus);
   const h0 = shape.depth - shape.flangeThickness;
@@ -76,13 +78,16 @@ export function bucklingLengths(shape: IShapeForDesign, steel: SteelForDesign): 
  *   this release does not implement; `value-not-positive` for L_b or C_b.
  */
 export function nominalFlexure(shape: IShapeForDesign, steel: SteelForDesign, unbracedLength: number, momentGradient: number): NominalFlexure {
+  return nominalFlexureChecked(checkIShape(shape), checkSteel(steel), unbracedLength, momentGradient);
+}
+
+/** @internal {@link nominalFlexure} on a shape and steel already checked (the member check reuses them per segment). */
+export function nominalFlexureChecked(shape: IShapeForDesign, steel: SteelForDesign, unbracedLength: number, momentGradient: number): NominalFlexure {
   if (!(unbracedLength > 0) || !Number.isFinite(unbracedLength))
     fail("value-not-positive", ["unbracedLength"], `The unbraced length must be a positive finite length; got ${unbracedLength}.`, { value: unbracedLength });
   if (!(momentGradient > 0) || !Number.isFinite(momentGradient))
     fail("value-not-positive", ["momentGradient"], `C_b must be a positive finite number; got ${momentGradient}.`, { value: momentGradient });
-  shape = checkIShape(shape);
-  steel = checkSteel(steel);
-  const classification = classifyIShape(shape, steel);
+  const classification = classifyCheckedIShape(shape, steel);
   const web = classification.web;
   if (web.class !== "compact")
     fail(
@@ -94,7 +99,7 @@ export function nominalFlexure(shape: IShapeForDesign, steel: SteelForDesign, un
   const { elasticModulus: E, yieldStrength: Fy } = steel;
   const Sx = shape.sectionModulus;
   const Mp = Fy * shape.plasticModulus;
-  const lengths = bucklingLengths(shape, steel);
+  const lengths = lengthsOf(shape, steel);
   const Lb = unbracedLength;
   let ltb: number | null = null;
   let ltbEquation = "";

@@ -3,7 +3,7 @@
 import { IssueCollector, attempt, fail, requireFinite, type Result } from "../../errors/index.js";
 import { extremesOf } from "../../math/index.js";
 import type { BeamSolution } from "../../beam/index.js";
-import { nominalFlexure, type NominalFlexure } from "./flexure.js";
+import { nominalFlexureChecked, type NominalFlexure } from "./flexure.js";
 import { momentGradient, type MomentGradient } from "./moment-gradient.js";
 import { nominalShear, type NominalShear } from "./shear.js";
 import { checkIShape, checkSteel, type IShapeForDesign, type SteelForDesign } from "./shape.js";
@@ -123,8 +123,8 @@ function bracePoints(solution: BeamSolution, braces: unknown, found: IssueCollec
  * @param shape - The I-shape's tabulated properties (see `IShapeForDesign`).
  * @param steel - E and F_y.
  * @param options - Method and brace points.
- * @throws FlexuraError from `checkIShape`, `checkSteel`; `rule-not-covered` (noncompact or slender
- *   web); `options-invalid`, `not-a-list`, `brace-outside-member`.
+ * @throws FlexuraError `options-invalid` (no solved member, a bad method); from `checkIShape`, `checkSteel`; `rule-not-covered` (noncompact or slender
+ *   web); `not-a-list`, `brace-outside-member`.
  * @example
  * ```ts
  * const check = checkSteelBeam(solveBeam(input), w18x50, { elasticModulus: 29000, yieldStrength: 50 }, { method: "lrfd", braces: [210] });
@@ -132,6 +132,8 @@ function bracePoints(solution: BeamSolution, braces: unknown, found: IssueCollec
  * ```
  */
 export function checkSteelBeam(solution: BeamSolution, shape: IShapeForDesign, steel: SteelForDesign, options: SteelBeamOptions): SteelBeamCheck {
+  if (typeof solution !== "object" || solution === null || !(solution.length > 0) || !Array.isArray(solution.reactions))
+    fail("options-invalid", ["solution"], "Give a solved member, the result of solveBeam, in the shape's units.");
   const s = checkIShape(shape);
   const m = checkSteel(steel);
   if (typeof options !== "object" || options === null) fail("options-invalid", ["options"], 'Give the options, at least { method: "lrfd" } or { method: "asd" }.');
@@ -173,7 +175,7 @@ function segmentCheck(solution: BeamSolution, shape: IShapeForDesign, steel: Ste
   const gradient = momentGradient(solution.moment, from, to);
   const freeEnd = !braced.has(from) || !braced.has(to);
   const cb = freeEnd ? Object.freeze({ ...gradient, factor: 1 }) : gradient;
-  const flexure = nominalFlexure(shape, steel, to - from, cb.factor);
+  const flexure = nominalFlexureChecked(shape, steel, to - from, cb.factor);
   const available = lrfd ? PHI_B * flexure.nominal : flexure.nominal / OMEGA_B;
   const utilisation = gradient.largest / available;
   return Object.freeze({ from, to, unbracedLength: to - from, momentGradient: cb, flexure, available, demand: gradient.largest, utilisation, pass: utilisation <= 1 });

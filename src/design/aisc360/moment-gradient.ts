@@ -42,8 +42,11 @@ export function momentGradient(moment: PiecewisePolynomial, from: number, to: nu
   if (!(to > from)) fail("interval-reversed", ["to"], `The segment must run forward; got ${from} to ${to}.`, { from, to });
   const e = extremesOf(moment, from, to);
   const top = Math.abs(e.max.value) >= Math.abs(e.min.value) ? e.max : e.min;
-  const largest = Math.max(Math.abs(top.value), absAt(moment, from), absAt(moment, to));
-  const largestAt = largest === Math.abs(top.value) ? top.at : absAt(moment, from) >= absAt(moment, to) ? from : to;
+  // The ends are read on both sides: an applied couple there makes the extremes' one side the smaller.
+  const atFrom = absAt(moment, from);
+  const atTo = absAt(moment, to);
+  const largest = Math.max(Math.abs(top.value), atFrom, atTo);
+  const largestAt = largest === Math.abs(top.value) ? top.at : atFrom >= atTo ? from : to;
   const span = to - from;
   const quarter = absAt(moment, from + span / 4);
   const centre = absAt(moment, from + span / 2);

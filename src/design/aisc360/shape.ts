@@ -1,8 +1,8 @@
 // The doubly symmetric I-shape and the steel a member check by AISC 360-16 reads: the tabulated
 // properties an engineer takes from a rolled-shape table (or computes for a welded girder), in
 // any one consistent unit set, checked once and frozen.
-import { IssueCollector, fail, requireFinite, type IssuePath } from "../../errors/index.js";
-import { unknownKeyHint } from "../../errors/index.js";
+import { IssueCollector, fail, type IssuePath } from "../../errors/index.js";
+import { readPositive, readRecord, refuseUnknownKeys } from "../read.js";
 
 /**
  * A doubly symmetric I-shape bent about its major axis, described by the properties that
@@ -64,28 +64,6 @@ const SHAPE_KEYS = [
 ] as const;
 const STEEL_KEYS = ["elasticModulus", "yieldStrength"] as const;
 
-function record(value: unknown, path: IssuePath, what: string): Readonly<Record<string, unknown>> {
-  if (typeof value !== "object" || value === null || Array.isArray(value))
-    fail("not-an-object", path, `The ${what} must be an object of named properties.`);
-  return value as Readonly<Record<string, unknown>>;
-}
-
-function unknownKeys(found: IssueCollector, obj: Readonly<Record<string, unknown>>, known: readonly string[], path: IssuePath, what: string): void {
-  for (const key of Object.keys(obj))
-    if (!known.includes(key)) found.add("unknown-field", [...path, key], `The ${what} has no property "${key}".${unknownKeyHint(key, known)}`, { field: key });
-}
-
-function positive(found: IssueCollector, obj: Readonly<Record<string, unknown>>, key: string, path: IssuePath, what: string): number {
-  const value = Object.hasOwn(obj, key) ? obj[key] : undefined;
-  if (value === undefined) {
-    found.add("missing-field", [...path, key], `The ${what} is missing; give it from the shape table or the grade (flexura has no defaults for it).`, { field: key });
-    return Number.NaN;
-  }
-  if (!requireFinite(found, value, [...path, key], what)) return Number.NaN;
-  if (!(value > 0)) found.add("value-not-positive", [...path, key], `The ${what} must be positive; got ${value}.`, { value });
-  return value;
-}
-
 /**
  * Checks an I-shape's properties: every one present, finite and positive, no unknown key, and
  * the dimensions consistent (flanges thinner than half the depth, web height within the depth,
@@ -95,9 +73,9 @@ function positive(found: IssueCollector, obj: Readonly<Record<string, unknown>>,
  *   `not-finite`, `value-not-positive`, `shape-inconsistent`, all collected.
  */
 export function checkIShape(value: unknown, path: IssuePath = ["shape"]): IShapeForDesign {
-  const obj = record(value, path, "I-shape");
+  const obj = readRecord(value, path, "I-shape");
   const found = new IssueCollector();
-  unknownKeys(found, obj, SHAPE_KEYS, path, "I-shape");
+  refuseUnknownKeys(found, obj, SHAPE_KEYS, path, "I-shape");
   const rolled = Object.hasOwn(obj, "rolled") ? obj["rolled"] : undefined;
   if (typeof rolled !== "boolean")
     found.add("missing-field", [...path, "rolled"], "Say whether the shape is rolled (true) or welded (false): it selects the flange limit of AISC 360-16 Table B4.1b and the shear rule G2.1(a).", { field: "rolled" });
@@ -116,7 +94,7 @@ export function checkIShape(value: unknown, path: IssuePath = ["shape"]): IShape
     warpingConstant: "warping constant C_w",
   };
   const v = {} as Record<string, number>;
-  for (const key of SHAPE_KEYS) if (key !== "rolled") v[key] = positive(found, obj, key, path, names[key]);
+  for (const key of SHAPE_KEYS) if (key !== "rolled") v[key] = readPositive(found, obj, key, path, names[key]);
   found.throwIfAny();
   const s = v as unknown as Omit<IShapeForDesign, "rolled">;
   if (!(2 * s.flangeThickness < s.depth))
@@ -138,11 +116,11 @@ export function checkIShape(value: unknown, path: IssuePath = ["shape"]): IShape
  *   `value-not-positive`, `steel-inconsistent`.
  */
 export function checkSteel(value: unknown, path: IssuePath = ["steel"]): SteelForDesign {
-  const obj = record(value, path, "steel");
+  const obj = readRecord(value, path, "steel");
   const found = new IssueCollector();
-  unknownKeys(found, obj, STEEL_KEYS, path, "steel");
-  const elasticModulus = positive(found, obj, "elasticModulus", path, "modulus of elasticity E");
-  const yieldStrength = positive(found, obj, "yieldStrength", path, "yield stress F_y");
+  refuseUnknownKeys(found, obj, STEEL_KEYS, path, "steel");
+  const elasticModulus = readPositive(found, obj, "elasticModulus", path, "modulus of elasticity E");
+  const yieldStrength = readPositive(found, obj, "yieldStrength", path, "yield stress F_y");
   found.throwIfAny();
   if (!(yieldStrength < elasticModulus))
     fail("steel-inconsistent", [...path, "yieldStrength"], `The yield stress ${yieldStrength} is not below the modulus ${elasticModulus}: are they in the same unit?`);

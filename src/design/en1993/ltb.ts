@@ -1,7 +1,7 @@
 // Lateral-torsional buckling of a doubly symmetric I-section, EN 1993-1-1:2005 6.3.2.2 (general case)
 // and 6.3.2.3 (rolled or equivalent welded sections), with M_cr from the three-factor formula.
 import { fail } from "../../errors/index.js";
-import { checkFactor, eurocodeResistance, RECOMMENDED_PARTIAL_FACTORS, type PartialFactors } from "./resistance.js";
+import { checkFactor, resistanceChecked, RECOMMENDED_PARTIAL_FACTORS, type PartialFactors } from "./resistance.js";
 import { checkEurocodeIShape, checkEurocodeSteel, type IShapeForEurocode, type SteelForEurocode } from "./shape.js";
 
 /** A buckling curve of EN 1993-1-1 Table 6.3 and its imperfection factor. */
@@ -28,12 +28,13 @@ export interface CriticalMomentOptions {
  * information on M_cr for EN 1993-1-1; flexura takes C_1 and C_2 from the user.)
  *
  * @param length - The segment's length between lateral restraints (length), positive.
- * @throws FlexuraError `value-not-positive` (length, C_1), `not-finite` (z_g, C_2).
+ * @throws FlexuraError `value-not-positive` (length, C_1), `not-finite` (z_g, C_2), `options-invalid` (no options), `missing-field` (z_g without C_2).
  */
 export function criticalMoment(shape: IShapeForEurocode, steel: SteelForEurocode, length: number, options: CriticalMomentOptions): number {
   shape = checkEurocodeIShape(shape);
   steel = checkEurocodeSteel(steel);
   if (!(length > 0) || !Number.isFinite(length)) fail("value-not-positive", ["length"], `The segment length must be positive and finite; got ${length}.`);
+  if (typeof options !== "object" || options === null) fail("options-invalid", ["options"], "Give the options, at least { momentShapeFactor: C_1 } (1.0 for uniform moment).");
   const c1 = options.momentShapeFactor;
   if (typeof c1 !== "number" || !(c1 > 0) || !Number.isFinite(c1)) fail("value-not-positive", ["options", "momentShapeFactor"], `C_1 must be a positive number (1.0 for uniform moment); got ${String(c1)}.`);
   const zg = options.loadHeight ?? 0;
@@ -73,9 +74,10 @@ export interface BucklingResistance {
  * @throws FlexuraError `value-not-positive` (M_cr), `options-invalid` (method).
  */
 export function bucklingResistance(shape: IShapeForEurocode, steel: SteelForEurocode, mcr: number, method: "general" | "rolled", factors: PartialFactors = RECOMMENDED_PARTIAL_FACTORS): BucklingResistance {
-  const section = eurocodeResistance(shape, steel, factors);
   shape = checkEurocodeIShape(shape);
-  const gM1 = checkFactor(factors.instability, "instability");
+  steel = checkEurocodeSteel(steel);
+  const section = resistanceChecked(shape, steel, factors);
+  const gM1 = checkFactor(factors, "instability");
   if (!(mcr > 0) || !Number.isFinite(mcr)) fail("value-not-positive", ["criticalMoment"], `The critical moment must be positive and finite; got ${mcr}.`);
   if (method !== "general" && method !== "rolled") fail("options-invalid", ["method"], `The method must be "general" (6.3.2.2) or "rolled" (6.3.2.3); got ${String(method)}.`);
   const wy = section.classification.class <= 2 ? shape.plasticModulus : shape.elasticModulus;

@@ -84,8 +84,10 @@ function requireNewtonMillimetre(steel: SteelForEurocode): void {
  * ```
  */
 export function classifyEurocodeIShape(shape: IShapeForEurocode, steel: SteelForEurocode): EurocodeClassification {
-  shape = checkEurocodeIShape(shape);
-  steel = checkEurocodeSteel(steel);
+  return classifyChecked(checkEurocodeIShape(shape), checkEurocodeSteel(steel));
+}
+
+function classifyChecked(shape: IShapeForEurocode, steel: SteelForEurocode): EurocodeClassification {
   requireNewtonMillimetre(steel);
   const e = Math.sqrt(235 / steel.yieldStrength);
   const web = partClass((shape.depth - 2 * shape.flangeThickness - 2 * shape.rootRadius) / shape.webThickness, [72 * e, 83 * e, 124 * e]);
@@ -103,9 +105,13 @@ export function classifyEurocodeIShape(shape: IShapeForEurocode, steel: SteelFor
  *   web that must be checked for shear buckling (h_w / t_w > 72 epsilon / eta, 6.2.6(6)).
  */
 export function eurocodeResistance(shape: IShapeForEurocode, steel: SteelForEurocode, factors: PartialFactors = RECOMMENDED_PARTIAL_FACTORS): EurocodeResistance {
-  const classification = classifyEurocodeIShape(shape, steel);
-  shape = checkEurocodeIShape(shape);
-  const gM0 = checkFactor(factors.crossSection, "crossSection");
+  return resistanceChecked(checkEurocodeIShape(shape), checkEurocodeSteel(steel), factors);
+}
+
+/** @internal {@link eurocodeResistance} on a shape and steel already checked. */
+export function resistanceChecked(shape: IShapeForEurocode, steel: SteelForEurocode, factors: PartialFactors): EurocodeResistance {
+  const classification = classifyChecked(shape, steel);
+  const gM0 = checkFactor(factors, "crossSection");
   if (classification.class === 4)
     fail("rule-not-covered", ["shape"], `The section is class 4 (${classification.web.class === 4 ? "web" : "flange"} c/t = ${(classification.web.class === 4 ? classification.web.ratio : classification.flange.ratio).toPrecision(4)}): effective widths of EN 1993-1-5 apply, which flexura does not implement.`);
   const eta = 1;
@@ -119,8 +125,10 @@ export function eurocodeResistance(shape: IShapeForEurocode, steel: SteelForEuro
   return Object.freeze({ classification, bending, shearArea, shear: (shearArea * fy) / Math.sqrt(3) / gM0, eta });
 }
 
-/** @internal A partial factor must be a finite number of at least 1. */
-export function checkFactor(value: unknown, name: string): number {
+/** @internal The partial factor `name` of `factors`, which must be a finite number of at least 1. */
+export function checkFactor(factors: unknown, name: keyof PartialFactors): number {
+  if (typeof factors !== "object" || factors === null) fail("partial-factor-invalid", ["factors"], "The partial factors must be an object { crossSection, instability } (recommended 1.00 each).");
+  const value = Object.hasOwn(factors, name) ? (factors as Record<string, unknown>)[name] : undefined;
   if (typeof value !== "number" || !Number.isFinite(value) || value < 1)
     fail("partial-factor-invalid", ["factors", name], `The partial factor ${name} must be a number of at least 1 (recommended 1.00); got ${String(value)}.`);
   return value;
@@ -133,10 +141,20 @@ export function checkFactor(value: unknown, name: string): number {
  * (1 - rho) M_c,Rd (the reduced yield strength taken over the whole section: conservative).
  * Never above M_c,Rd. Refuses V_Ed above V_pl,Rd.
  *
- * @param shear - |V_Ed| (force).
- * @throws FlexuraError `shear-exceeds-resistance` when |V_Ed| > V_pl,Rd.
+ * @param resistance - The section's resistances, from {@link eurocodeResistance} with the same shape, steel and factors.
+ * @param shear - V_Ed (force); its magnitude is used.
+ * @throws FlexuraError `shear-exceeds-resistance` when |V_Ed| > V_pl,Rd; `not-a-number` / `not-finite`
+ *   for V_Ed; `options-invalid` for resistances that are not positive numbers; the shape, steel and
+ *   partial-factor checks.
  */
 export function bendingWithShear(shape: IShapeForEurocode, steel: SteelForEurocode, resistance: EurocodeResistance, shear: number, factors: PartialFactors = RECOMMENDED_PARTIAL_FACTORS): number {
+  shape = checkEurocodeIShape(shape);
+  steel = checkEurocodeSteel(steel);
+  const gM0 = checkFactor(factors, "crossSection");
+  if (typeof shear !== "number") fail("not-a-number", ["shear"], `V_Ed must be a number; got ${typeof shear}.`);
+  if (!Number.isFinite(shear)) fail("not-finite", ["shear"], `V_Ed must be a finite number; got ${shear}.`);
+  if (typeof resistance !== "object" || resistance === null || !(resistance.shear > 0 && resistance.bending > 0) || !Number.isFinite(resistance.shear) || !Number.isFinite(resistance.bending))
+    fail("options-invalid", ["resistance"], "Give the section's resistances from eurocodeResistance(shape, steel, factors).");
   const v = Math.abs(shear);
   if (v <= 0.5 * resistance.shear) return resistance.bending;
   if (v > resistance.shear) fail("shear-exceeds-resistance", ["shear"], `V_Ed = ${v} exceeds V_pl,Rd = ${resistance.shear}: no bending resistance is left by 6.2.8.`, { shear: v, resistance: resistance.shear });
@@ -144,6 +162,6 @@ export function bendingWithShear(shape: IShapeForEurocode, steel: SteelForEuroco
   if (resistance.classification.class === 3) return (1 - rho) * resistance.bending;
   const hw = shape.depth - 2 * shape.flangeThickness;
   const aw = hw * shape.webThickness;
-  const reduced = ((shape.plasticModulus - (rho * aw * aw) / (4 * shape.webThickness)) * steel.yieldStrength) / factors.crossSection;
+  const reduced = ((shape.plasticModulus - (rho * aw * aw) / (4 * shape.webThickness)) * steel.yieldStrength) / gM0;
   return Math.min(reduced, resistance.bending);
 }

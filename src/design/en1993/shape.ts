@@ -1,6 +1,7 @@
 // The doubly symmetric I-section and the steel a check by EN 1993-1-1:2005 reads, in N and mm (or
 // any consistent set), checked once and frozen.
-import { IssueCollector, fail, requireFinite, unknownKeyHint, type IssuePath } from "../../errors/index.js";
+import { IssueCollector, fail, type IssuePath } from "../../errors/index.js";
+import { readPositive, readRecord, refuseUnknownKeys } from "../read.js";
 
 /**
  * A doubly symmetric I-section bent about its major axis (y-y), described by the properties that
@@ -61,25 +62,20 @@ const SHAPE_KEYS = [
 ] as const;
 const STEEL_KEYS = ["elasticModulus", "shearModulus", "yieldStrength"] as const;
 
-function record(value: unknown, path: IssuePath, what: string): Readonly<Record<string, unknown>> {
-  if (typeof value !== "object" || value === null || Array.isArray(value)) fail("not-an-object", path, `The ${what} must be an object of named properties.`);
-  return value as Readonly<Record<string, unknown>>;
-}
-
-function read(found: IssueCollector, obj: Readonly<Record<string, unknown>>, key: string, path: IssuePath, allowZero: boolean): number {
-  const value = Object.hasOwn(obj, key) ? obj[key] : undefined;
-  if (value === undefined) {
-    found.add("missing-field", [...path, key], `"${key}" is missing; give it from the section table or the steel grade (flexura has no defaults for it).`, { field: key });
-    return Number.NaN;
-  }
-  if (!requireFinite(found, value, [...path, key], key)) return Number.NaN;
-  if (allowZero ? !(value >= 0) : !(value > 0)) found.add("value-not-positive", [...path, key], `"${key}" must be ${allowZero ? "zero or more" : "positive"}; got ${value}.`, { value });
-  return value;
-}
-
-function keys(found: IssueCollector, obj: Readonly<Record<string, unknown>>, known: readonly string[], path: IssuePath, what: string): void {
-  for (const key of Object.keys(obj)) if (!known.includes(key)) found.add("unknown-field", [...path, key], `The ${what} has no property "${key}".${unknownKeyHint(key, known)}`, { field: key });
-}
+const NAMES: Readonly<Record<(typeof SHAPE_KEYS)[number], string>> = {
+  rolled: "",
+  depth: "depth h",
+  flangeWidth: "flange width b",
+  flangeThickness: "flange thickness t_f",
+  webThickness: "web thickness t_w",
+  rootRadius: "root radius r",
+  area: "area A",
+  elasticModulus: "elastic section modulus W_el,y",
+  plasticModulus: "plastic section modulus W_pl,y",
+  minorMomentOfInertia: "minor-axis second moment of area I_z",
+  torsionConstant: "torsion constant I_t",
+  warpingConstant: "warping constant I_w",
+};
 
 /**
  * Checks an I-section for EN 1993-1-1: every property present, finite and positive (the root
@@ -89,13 +85,13 @@ function keys(found: IssueCollector, obj: Readonly<Record<string, unknown>>, kno
  *   `value-not-positive`, `shape-inconsistent`, all collected.
  */
 export function checkEurocodeIShape(value: unknown, path: IssuePath = ["shape"]): IShapeForEurocode {
-  const obj = record(value, path, "I-section");
+  const obj = readRecord(value, path, "I-section");
   const found = new IssueCollector();
-  keys(found, obj, SHAPE_KEYS, path, "I-section");
+  refuseUnknownKeys(found, obj, SHAPE_KEYS, path, "I-section");
   const rolled = Object.hasOwn(obj, "rolled") ? obj["rolled"] : undefined;
   if (typeof rolled !== "boolean") found.add("missing-field", [...path, "rolled"], "Say whether the section is rolled (true) or welded (false): it selects the shear area and the buckling curve.", { field: "rolled" });
   const v: Record<string, number> = {};
-  for (const key of SHAPE_KEYS) if (key !== "rolled") v[key] = read(found, obj, key, path, key === "rootRadius");
+  for (const key of SHAPE_KEYS) if (key !== "rolled") v[key] = readPositive(found, obj, key, path, NAMES[key], key === "rootRadius");
   found.throwIfAny();
   const s = v as unknown as Omit<IShapeForEurocode, "rolled">;
   if (!(s.depth - 2 * s.flangeThickness - 2 * s.rootRadius > 0))
@@ -115,12 +111,12 @@ export function checkEurocodeIShape(value: unknown, path: IssuePath = ["shape"])
  *   `value-not-positive`, `steel-inconsistent`.
  */
 export function checkEurocodeSteel(value: unknown, path: IssuePath = ["steel"]): SteelForEurocode {
-  const obj = record(value, path, "steel");
+  const obj = readRecord(value, path, "steel");
   const found = new IssueCollector();
-  keys(found, obj, STEEL_KEYS, path, "steel");
-  const elasticModulus = read(found, obj, "elasticModulus", path, false);
-  const shearModulus = read(found, obj, "shearModulus", path, false);
-  const yieldStrength = read(found, obj, "yieldStrength", path, false);
+  refuseUnknownKeys(found, obj, STEEL_KEYS, path, "steel");
+  const elasticModulus = readPositive(found, obj, "elasticModulus", path, "modulus of elasticity E");
+  const shearModulus = readPositive(found, obj, "shearModulus", path, "shear modulus G");
+  const yieldStrength = readPositive(found, obj, "yieldStrength", path, "yield strength f_y");
   found.throwIfAny();
   if (!(yieldStrength < shearModulus && shearModulus < elasticModulus))
     fail("steel-inconsistent", path, `Expected f_y < G < E; got f_y = ${yieldStrength}, G = ${shearModulus}, E = ${elasticModulus}: are they in the same unit?`);
