@@ -1,6 +1,6 @@
 export { escapeXml } from "./escape.js";
 export { svgNumber, svgElement, svgText, svgPolyline, svgPolygon, svgDocument, type SvgAttributes } from "./svg.js";
-export { formatReportNumber, formatReportQuantity, snapToZero, textTable } from "./format.js";
+export { formatReportNumber, formatReportQuantity, snapToZero, textTable, utilisationText } from "./format.js";
 export { sampleDiagram, diagramValueAt, SAMPLE_BUDGET, type SampleDiagramOptions } from "./sample.js";
 export { lineDiagramSvg, type LineDiagramData, type LineDiagramOptions, type DiagramPeak } from "./line-diagram.js";
 export type { MemberDrawing, DrawnSupport, DrawnSupportType, DrawnLoad } from "./member-drawing.js";
@@ -14,7 +14,6 @@ export { reportDiagrams, type ReportDiagram, type ReportDiagramName, type Report
 export {
   calculationSheet,
   calculationBook,
-  utilisationText,
   calculationFigure,
   figureDocument,
   placeLabels,

@@ -1,7 +1,7 @@
 import type { Model, ModelAnalysis, ModelCheck, ModelLoad } from "../../model/index.js";
 import { REPORT_CAUTION } from "../caution.js";
 import { escapeXml } from "../escape.js";
-import { formatReportNumber, snapToZero } from "../format.js";
+import { formatReportNumber, snapToZero, utilisationText } from "../format.js";
 import { calculationFigure, type CalculationFigure } from "./figure.js";
 import { sha256Hex } from "./sha256.js";
 import { printedUnit } from "./units.js";
@@ -350,23 +350,6 @@ function figureBlock(figure: CalculationFigure, heightMm: number): string {
   return `<section id="figure"><h2>1 Figure</h2><figure style="--figure-height:${heightMm}mm">${figure.svg}<figcaption>Member, shear, moment and deflection on one x axis; faint guides carry supports, hinges and load positions down through the plots.</figcaption></figure>${missing}</section>`;
 }
 
-/**
- * A utilisation to three significant figures, trailing zeros kept (1.196 is "1.20", never "1.2").
- *
- * @param value - demand / capacity (finite, >= 0).
- * @example
- * ```ts
- * utilisationText(1.196); // "1.20"
- * ```
- */
-export function utilisationText(value: number): string {
-  if (!Number.isFinite(value)) return "not finite";
-  if (value === 0) return "0.00";
-  if (Math.abs(value) >= 1000) return value.toFixed(0);
-  const t = value.toPrecision(3);
-  return t.includes("e") ? Number(t).toString() : t;
-}
-
 function checks(analysis: ModelAnalysis, plain: boolean, notes: Notes): string {
   const list: readonly ModelCheck[] = analysis.checks;
   const out: string[] = [`<section id="checks"><h2>5 Checks</h2>`];
@@ -375,11 +358,10 @@ function checks(analysis: ModelAnalysis, plain: boolean, notes: Notes): string {
   } else {
     const failed = list.filter((c) => !c.pass).length;
     const governing = list.reduce((a, b) => (b.utilisation > a.utilisation ? b : a));
-    const word = list.length === 1 ? "check" : "checks";
     out.push(
       failed === 0
         ? `<p class="verdict pass" data-verdict="pass"><strong>PASS</strong>: ${list.length === 1 ? "the one check passes" : `all ${list.length} checks pass`}; the largest utilisation is ${utilisationText(governing.utilisation)} (${escapeXml(governing.description)}).</p>`
-        : `<p class="verdict fail" data-verdict="fail"><strong>FAIL</strong>: ${failed} of ${list.length} ${word} ${failed === 1 ? "fails" : "fail"}; the largest utilisation is ${utilisationText(governing.utilisation)} (${escapeXml(governing.description)}).</p>`,
+        : `<p class="verdict fail" data-verdict="fail"><strong>FAIL</strong>: ${list.length === 1 ? "the one check fails" : `${failed} of ${list.length} checks fail`}; the largest utilisation is ${utilisationText(governing.utilisation)} (${escapeXml(governing.description)}).</p>`,
     );
     out.push(
       table(
