@@ -50,7 +50,7 @@ export { closedSectionTorsion, tryClosedSectionTorsion } from "./closedTorsion.j
 export type { ExactTorsion } from "./torsionExact.js";
 export { torsionConstantExact, tryTorsionConstantExact } from "./torsionExact.js";
 export { torsionConstantRolledI, torsionConstantRolledTee, tryTorsionConstantRolledI, tryTorsionConstantRolledTee } from "./torsionRolled.js";
-export type { PrincipalBending, PrincipalAxisProperties } from "./principalModuli.js";
+export type { PrincipalSides, PrincipalBending, PrincipalAxisProperties } from "./principalModuli.js";
 export { principalAxisProperties, tryPrincipalAxisProperties } from "./principalModuli.js";
 export type { FullyPlasticMoments } from "./fullyPlastic.js";
 export { fullyPlasticMoments, tryFullyPlasticMoments } from "./fullyPlastic.js";

@@ -8,6 +8,21 @@ import type { SectionPropertiesOptions } from "./propertyTypes.js";
 import type { Section } from "./types.js";
 
 /**
+ * A pair of values on the two sides of a principal axis.
+ *
+ * @example
+ * ```ts
+ * const s: PrincipalSides = principalAxisProperties(angle({ verticalLeg: 100, thickness: 10 })).major.sectionModulus;
+ * ```
+ */
+export interface PrincipalSides {
+  /** On the side the axis's normal points to (see {@link PrincipalAxisProperties}). */
+  readonly positive: number;
+  /** On the other side. */
+  readonly negative: number;
+}
+
+/**
  * Bending about one principal axis.
  *
  * @example
@@ -24,9 +39,9 @@ export interface PrincipalBending {
    * Distances from the axis to the farthest fibre on each side (length, both > 0): `positive` on
    * the side the axis's normal points to (see {@link PrincipalAxisProperties}), `negative` on the other.
    */
-  readonly extremes: { readonly positive: number; readonly negative: number };
+  readonly extremes: PrincipalSides;
   /** I over each extreme distance (length^3): the elastic section moduli for bending about this axis. */
-  readonly sectionModulus: { readonly positive: number; readonly negative: number };
+  readonly sectionModulus: PrincipalSides;
 }
 
 /**
