@@ -118,3 +118,13 @@ describe("calculationSheet", () => {
     expect(html.match(/<td>roller<\/td>/g)?.length).toBe(4000);
   });
 });
+
+describe("textReport header", () => {
+  it("names the program version and the input file with its SHA-256", async () => {
+    const { textReport } = await import("../../../src/report/index.js");
+    const [first] = examples();
+    const text = textReport(first!.analysis, { input: { name: first!.file, bytes: first!.text } });
+    expect(text).toContain(`Program: flexura ${FLEXURA_VERSION}`);
+    expect(text).toContain(`Input: ${first!.file} (SHA-256 ${createHash("sha256").update(first!.text, "utf8").digest("hex")})`);
+  });
+});
