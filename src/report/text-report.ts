@@ -5,12 +5,20 @@ import { reportChecks, reportForces, reportSection } from "./text-results.js";
 import { sha256Hex } from "./document/sha256.js";
 import { FLEXURA_VERSION } from "./document/version.js";
 
+/** The input file a report was made from. */
+export interface TextReportInput {
+  /** The file's name as the user knows it. */
+  readonly name: string;
+  /** The file's bytes, or its text (hashed as UTF-8). */
+  readonly bytes: Uint8Array | string;
+}
+
 /** Layout of the text report. */
 export interface TextReportOptions {
   /** Width at which prose (the caution, the description) is wrapped; default 96 characters. */
   readonly width?: number;
   /** The input file the model was read from: its name and bytes, named and hashed (SHA-256) in the header. */
-  readonly input?: { readonly name: string; readonly bytes: Uint8Array | string };
+  readonly input?: TextReportInput;
 }
 
 /**
