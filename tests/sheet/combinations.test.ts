@@ -1,11 +1,12 @@
 // The combination and envelope functions in a real spreadsheet engine (HyperFormula): cases, a preset or a
 // factors range, envelopes at a position, envelope peaks and reaction envelopes, every value compared with the
 // typed API (flexura/combine on the same member), a few hand checks, an edit, and our messages in error cells.
+import { fc, test as propTest } from "@fast-check/vitest";
 import { describe, expect, test } from "vitest";
 import { envelopes, presetCombinations, solveCases, type Combination, type Envelopes, type LoadCase } from "../../src/combine/index.js";
 import { evaluatePiecewise, findPiece } from "../../src/math/index.js";
 import { uniformLoad } from "../../src/loads/index.js";
-import { callSheetFunction, sheetSolveCount } from "../../src/sheet/index.js";
+import { callSheetFunction, isSheetError, sheetFunctions, sheetSolveCount } from "../../src/sheet/index.js";
 import { workbook } from "./engine.js";
 
 // An invented two-span floor beam: spans of 5 m and 6 m, E 200 GPa, I 80e6 mm^4; dead 2 kN/m, live 10 kN/m placed span by span.
@@ -194,4 +195,62 @@ describe("combination functions called directly", () => {
   test("a cap above the largest is refused with the option named", () => {
     expect(callSheetFunction("FLEXURA.ENVELOPEPEAKS", [cases, "asce7-16-strength", [["cap", 40]], ...member])).toMatchObject({ code: "pattern-cap-too-large", message: expect.stringMatching(/^options, cap: /) as unknown });
   });
+});
+
+describe("combination functions: laws and bad input", () => {
+  const arb = fc.record({
+    first: fc.integer({ min: 2, max: 8 }),
+    second: fc.integer({ min: 2, max: 8 }),
+    dead: fc.integer({ min: 1, max: 20 }),
+    live: fc.integer({ min: -10, max: 30 }),
+    point: fc.integer({ min: -40, max: 40 }),
+    at: fc.integer({ min: 0, max: 16 }),
+    x: fc.integer({ min: 0, max: 16 }),
+    factors: fc.array(fc.tuple(fc.integer({ min: -20, max: 20 }), fc.integer({ min: -20, max: 20 })), { minLength: 1, maxLength: 4 }),
+  });
+  propTest.prop([arb])("ENVELOPE max and min at x are the largest and smallest of MOMENT at x over the rows, each with its loads factored", (m) => {
+    const length = m.first + m.second;
+    const supports = [[0, "pin"], [m.first, "roller"], [length, "roller"]];
+    const at = (m.at * length) / 16;
+    const x = (m.x * length) / 16;
+    const rows = m.factors.map(([d, l]) => [d / 10, l / 10]).filter(([d, l]) => d !== 0 || l !== 0);
+    fc.pre(rows.length > 0);
+    const loads = (fd: number, fl: number, cased: boolean): unknown[][] => [
+      ["distributed", null, null, m.dead * fd, null, cased ? "D" : null],
+      ["distributed", null, null, m.live * fl, null, cased ? "L" : null],
+      ["point", at, null, m.point * fl, null, cased ? "L" : null],
+    ];
+    const member = (fd: number, fl: number, cased: boolean): unknown[] => [length, "200 GPa", "80e6 mm^4", supports, loads(fd, fl, cased)];
+    const factorsRange = [["combination", "D", "L"], ...rows.map(([d, l], i) => [`c${i}`, d === 0 ? null : d, l === 0 ? null : l])];
+    const direct = rows.map(([d, l]) => callSheetFunction("FLEXURA.MOMENT", [x, ...member(d!, l!, false)]) as number);
+    const scale = Math.max(1, ...direct.map((v) => Math.abs(v)), (m.dead + Math.abs(m.live)) * length ** 2, Math.abs(m.point) * length);
+    const cases = [["D", "dead"], ["L", "live"]];
+    const upper = callSheetFunction("FLEXURA.ENVELOPE", ["moment", "max", x, cases, factorsRange, null, ...member(1, 1, true)]);
+    const lower = callSheetFunction("FLEXURA.ENVELOPE", ["moment", "min", x, cases, factorsRange, null, ...member(1, 1, true)]);
+    expect(Math.abs((upper as number) - Math.max(...direct))).toBeLessThanOrEqual(1e-9 * scale);
+    expect(Math.abs((lower as number) - Math.min(...direct))).toBeLessThanOrEqual(1e-9 * scale);
+    // The governing row gives the bound's value.
+    const name = callSheetFunction("FLEXURA.GOVERNING", ["moment", "max", x, cases, factorsRange, null, ...member(1, 1, true)]) as string;
+    const i = rows.findIndex((_, k) => `c${k}` === name);
+    expect(Math.abs(direct[i]! - (upper as number))).toBeLessThanOrEqual(1e-9 * scale);
+  });
+  const junk = fc.oneof(fc.constant(null), fc.string({ maxLength: 6 }), fc.double(), fc.boolean(), fc.constantFrom("dead", "live", "TRUE", "asce7-16-strength", "en1990-strength", "D", "L", "map.D", "cap", "settlementCase"));
+  const junkRange = fc.array(fc.array(junk, { minLength: 1, maxLength: 5 }), { minLength: 1, maxLength: 4 });
+  propTest.prop([fc.oneof(junkRange, junk), fc.oneof(junkRange, junk), fc.oneof(junkRange, junk), junk, junk])(
+    "junk in the cases, combinations and options cells is an error value or a finite answer, never thrown",
+    (cases, combinations, options, quantity, x) => {
+      const member = [11, "200 GPa", "80e6 mm^4", [[0, "pin"], [5, "roller"], [11, "roller"]], [["distributed", null, null, 2, null, "D"], ["distributed", null, null, 10, null, "L"]]];
+      for (const f of sheetFunctions.filter((g) => ["FLEXURA.COMBINATIONS", "FLEXURA.ENVELOPE", "FLEXURA.ENVELOPEPEAKS", "FLEXURA.REACTIONENVELOPE"].includes(g.name))) {
+        const args = f.name === "FLEXURA.COMBINATIONS" ? [cases, combinations, options] : f.name === "FLEXURA.ENVELOPE" ? [quantity, "max", x, cases, combinations, options, ...member] : [cases, combinations, options, ...member];
+        const r = f.call(...args);
+        if (isSheetError(r)) {
+          expect(r.code).not.toBe("sheet-internal-error");
+          expect(r.message.length).toBeGreaterThan(0);
+        } else {
+          const cells = Array.isArray(r) ? (r as unknown[][]).flat() : [r];
+          for (const c of cells) if (typeof c === "number") expect(Number.isFinite(c)).toBe(true);
+        }
+      }
+    },
+  );
 });
