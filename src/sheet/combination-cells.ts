@@ -6,7 +6,12 @@ export interface SheetCombinationInput {
   /** The load cases, in the order of the cases range's rows. */
   readonly cases: readonly LoadCase[];
   /** A preset to form the combinations from, with its options; or `undefined` when the combinations were given as factors. */
-  readonly preset?: { readonly name: PresetName; readonly options: PresetOptions };
+  readonly preset?: {
+    /** The preset's name. */
+    readonly name: PresetName;
+    /** Its options, as read from the options range (checked by the preset). */
+    readonly options: PresetOptions;
+  };
   /** The combinations given as factors (a factors range); empty when a preset forms them. */
   readonly combinations: readonly Combination[];
   /** The sheet row (1-based, in the factors range) of each combination given as factors. */
