@@ -7,7 +7,7 @@ import { envelopes, solveCases, type CaseSolutions, type DiagramEnvelope, type E
 import { FlexuraError, isFlexuraError, type FlexuraIssue, type IssuePath } from "../errors/index.js";
 import type { ModelScale } from "./analysis.js";
 import { deflectionLimitInSI } from "./checks.js";
-import type { ModelCombinationCheck, ModelCombinationCheckRow, ModelCombinationResults, ModelEnvelope, ModelEnvelopeBound, ModelReactionEnvelope } from "./combination-types.js";
+import type { ModelCombinationCheck, ModelCombinationCheckRow, ModelCombinationResults, ModelEnvelope, ModelEnvelopeBound, ModelReactionRange } from "./combination-types.js";
 import { diagramInModelUnits } from "./diagrams.js";
 import type { Model, ModelDeflectionLimit } from "./model.js";
 import type { SectionInSI } from "./model-section.js";
@@ -38,7 +38,7 @@ function envelopeOf(e: DiagramEnvelope | undefined, arrangements: readonly LoadA
   return { upper: bound(d.upper, arrangements, lengthScale, valueScale, unit), lower: bound(d.lower, arrangements, lengthScale, valueScale, unit) };
 }
 
-function range(r: ReactionRange, scale: number): ModelReactionEnvelope["force"] {
+function range(r: ReactionRange, scale: number): ModelReactionRange {
   return { max: { value: r.max.value / scale, combination: r.max.name }, min: { value: r.min.value / scale, combination: r.min.name } };
 }
 

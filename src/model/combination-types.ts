@@ -100,6 +100,26 @@ export interface ModelGoverningReaction {
   readonly combination: string;
 }
 
+/** The largest and smallest value of one reaction component, each with its governing combination. */
+export interface ModelReactionRange {
+  /** The largest value. */
+  readonly max: ModelGoverningReaction;
+  /** The smallest value (for a force, negative is uplift). */
+  readonly min: ModelGoverningReaction;
+}
+
+/** The envelopes of the four diagrams. */
+export interface ModelEnvelopes {
+  /** Shear force, in the force unit. */
+  readonly shear: ModelEnvelope;
+  /** Bending moment (sagging positive), in the moment unit. */
+  readonly moment: ModelEnvelope;
+  /** Slope (counterclockwise positive), in the rotation unit. */
+  readonly slope: ModelEnvelope;
+  /** Deflection (upward positive), in the deflection unit. */
+  readonly deflection: ModelEnvelope;
+}
+
 /** The envelope of one support's reaction. */
 export interface ModelReactionEnvelope {
   /** Index of the support in `model.supports`. */
@@ -107,9 +127,9 @@ export interface ModelReactionEnvelope {
   /** Position, in the length unit. */
   readonly at: number;
   /** Largest upward force (`max`) and largest downward (`min`; negative is uplift), in the force unit. */
-  readonly force: { readonly max: ModelGoverningReaction; readonly min: ModelGoverningReaction };
+  readonly force: ModelReactionRange;
   /** Largest and smallest moment, in the moment unit. */
-  readonly moment: { readonly max: ModelGoverningReaction; readonly min: ModelGoverningReaction };
+  readonly moment: ModelReactionRange;
 }
 
 /** One check of a row of the utilisation table, at its worst over the patterns, in the model's units. */
@@ -165,7 +185,7 @@ export interface ModelCombinationResults {
   /** How many arrangements (combinations times patterns) the envelopes cover. */
   readonly arrangements: number;
   /** Envelopes of shear, moment, slope and deflection over every combination and pattern; absent when the model has no combinations (check groups of cases alone). */
-  readonly envelopes?: { readonly shear: ModelEnvelope; readonly moment: ModelEnvelope; readonly slope: ModelEnvelope; readonly deflection: ModelEnvelope };
+  readonly envelopes?: ModelEnvelopes;
   /** Reaction envelopes, in the order of `model.supports`; absent when the model has no combinations. */
   readonly reactions?: readonly ModelReactionEnvelope[];
   /** The utilisation table of the check groups (empty without `checkGroups`). */
