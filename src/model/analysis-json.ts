@@ -47,5 +47,6 @@ export function analysisToJson(analysis: ModelAnalysis): ModelAnalysisJson {
     pass: analysis.pass,
     warnings: analysis.warnings,
     diagrams: analysis.diagrams,
+    ...(analysis.combinations === undefined ? {} : { combinations: analysis.combinations }),
   });
 }

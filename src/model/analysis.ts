@@ -1,5 +1,6 @@
 import type { BeamSolution } from "../beam/index.js";
 import type { Section } from "../section/index.js";
+import type { ModelCombinationResults } from "./combination-types.js";
 import type { Model, ModelUnits } from "./model.js";
 
 /**
@@ -243,10 +244,13 @@ export interface ModelResults {
   /** Checks against the model's limits (those that could be evaluated). */
   readonly checks: readonly ModelCheck[];
   /**
-   * True when at least one check ran and every check passes. False when a check fails, and when
-   * no limit was given (`checks` is then empty): with nothing checked there is no pass to claim.
+   * True when at least one check ran and every check passes, the checks per combination
+   * (`combinations.checks`) included. False when a check fails, and when no limit and no check
+   * group was given: with nothing checked there is no pass to claim.
    */
   readonly pass: boolean;
+  /** Cases, combinations, envelopes and the checks per combination, when the model has `cases`. */
+  readonly combinations?: ModelCombinationResults;
   /** Shear, moment, slope and deflection along the member, for plotting. */
   readonly diagrams: ModelDiagrams;
   /** Cautions about the model or its results. */

@@ -1,6 +1,7 @@
-import { solveBeam, type BeamSolution } from "../beam/index.js";
+import { solveBeam, type BeamInput, type BeamSolution } from "../beam/index.js";
 import { attempt, FlexuraError, isFlexuraError, type FlexuraIssue, type Result } from "../errors/index.js";
 import type { ModelAnalysis, ModelScale, ModelWarning } from "./analysis.js";
+import { combinationResults, withSelfWeight } from "./analyze-combinations.js";
 import { beamInputInSI } from "./beam-input.js";
 import { modelVerdicts } from "./checks.js";
 import { diagramsOf, peaksInModelUnits } from "./diagrams.js";
@@ -8,6 +9,7 @@ import type { Model } from "./model.js";
 import { sectionInSI, sectionResult, withDeprecatedNames, type SectionInSI } from "./model-section.js";
 import { plainResults } from "./plain.js";
 import { refuseNotFinite, stiffnessPath } from "./not-finite.js";
+import { resolveCombinations } from "./resolve-combinations.js";
 import { checkTypedModel } from "./typed-check.js";
 import { scaleOfUnits } from "./units.js";
 
@@ -26,11 +28,15 @@ function toModelPath(i: FlexuraIssue, model: Model): FlexuraIssue {
   return i;
 }
 
-function solve(model: Model, scale: ModelScale, section: SectionInSI | undefined): BeamSolution {
+function inputOf(model: Model, scale: ModelScale, section: SectionInSI | undefined): BeamInput {
   const input = beamInputInSI(model, scale, section?.properties.secondMomentZ);
   if (input === undefined) {
     throw new FlexuraError([{ code: "stiffness-missing", path: ["I"], message: 'Give the member\'s stiffness: "E" and "I", or "segments", or a "section" with a "material".' }]);
   }
+  return input;
+}
+
+function solve(model: Model, input: BeamInput): BeamSolution {
   try {
     return solveBeam(input);
   } catch (e) {
@@ -49,8 +55,11 @@ function axesInclined(section: SectionInSI): boolean {
  * Analyses a model: converts it to SI, solves the member, and when the model has a section,
  * computes its properties and the extreme bending and shear stresses; checks the member against
  * the model's limits. Stresses and checks come from the member-check module (`checkMember` of
- * `flexura/check`, run on the member in SI), so a model and a direct call give the same verdicts. Every load acts with factor 1 (load cases are kept on the loads but not
- * combined). Results are in the model's own units, named in `units`.
+ * `flexura/check`, run on the member in SI), so a model and a direct call give the same verdicts. The main results have every load acting with factor 1 (the self-weight
+ * included); with `cases`, `combinations` holds each case solved once, the combinations formed by
+ * superposition with their envelopes over every pattern (each peak naming its governing
+ * combination), the reaction envelopes and the utilisation table of the check groups (see
+ * docs/combinations.md). Results are in the model's own units, named in `units`.
  *
  * Sign conventions: reactions positive upward and counterclockwise; moment positive sagging;
  * shear V = dM/dx; slope positive counterclockwise; deflection positive upward; stress positive
@@ -79,7 +88,12 @@ export function analyzeModel(model: Model): ModelAnalysis {
   checkTypedModel(model);
   const scale = fullScale(model);
   const section = sectionInSI(model, scale);
-  const solution = solve(model, scale, section);
+  const found: FlexuraIssue[] = [];
+  resolveCombinations(model, found);
+  if (found.length > 0) throw new FlexuraError(found);
+  const input = withSelfWeight(model, scale, section, inputOf(model, scale, section));
+  const solution = solve(model, input);
+  const combinations = combinationResults(model, scale, section, input);
   const warnings: ModelWarning[] = solution.warnings.map((w) => ({ code: w.code, message: w.message }));
   if (section !== undefined && axesInclined(section)) {
     warnings.push({
@@ -104,9 +118,10 @@ export function analyzeModel(model: Model): ModelAnalysis {
     ...(section === undefined || model.section === undefined ? {} : { section: sectionResult(model.section.shape, section.properties, scale) }),
     ...(stress === undefined ? {} : { stress }),
     checks,
-    pass: checks.length > 0 && checks.every((c) => c.pass),
+    pass: (checks.length > 0 || (combinations?.checks.length ?? 0) > 0) && checks.every((c) => c.pass) && combinations?.pass !== false,
     diagrams: diagramsOf(solution, scale, model.units),
     warnings,
+    ...(combinations === undefined ? {} : { combinations }),
   });
   if (plain.notFinite !== undefined) refuseNotFinite(model, plain.notFinite, plain.bad);
   const results = plain.value;

@@ -1,3 +1,4 @@
+import type { LoadCase, ModelCombinationEntry, ModelCombinationSelection, PatternOptions } from "./combination-types.js";
 import type { ModelFileMaterial, ModelFileSection } from "./file-section.js";
 
 /**
@@ -133,5 +134,45 @@ export interface ModelFile {
     readonly bendingStress?: ModelQuantity;
     /** Allowable shear stress. */
     readonly shearStress?: ModelQuantity;
+  };
+  /** The load cases; each load names its case in `case`. */
+  readonly cases?: readonly LoadCase[];
+  /** The case holding the supports' settlements and prescribed rotations. */
+  readonly settlementCase?: string;
+  /** The member's own weight as a dead case (needs a section). */
+  readonly selfWeight?: {
+    /** The case's name (default `"self-weight"`). */
+    readonly case?: string;
+    /** Weight per volume, such as `"77 kN/m^3"` (a plain number: force unit per length unit cubed). */
+    readonly unitWeight: ModelQuantity;
+  };
+  /** Presets `{ preset, options }` and combinations `{ name, purpose, factors }`. */
+  readonly combinations?: readonly ModelCombinationEntry[];
+  /** The pattern search: `{ cap }`. */
+  readonly patterns?: PatternOptions;
+  /** Checks per combination. */
+  readonly checkGroups?: {
+    /** Stress groups. */
+    readonly stress?: readonly {
+      /** The group's name. */
+      readonly name: string;
+      /** A purpose, or a list of combination names. */
+      readonly combinations: ModelCombinationSelection;
+      /** Allowable bending stress. */
+      readonly bendingStress?: ModelQuantity;
+      /** Allowable shear stress. */
+      readonly shearStress?: ModelQuantity;
+    }[];
+    /** Deflection groups. */
+    readonly deflection?: readonly {
+      /** The group's name. */
+      readonly name: string;
+      /** The cases and their factors. */
+      readonly factors?: Readonly<Record<string, number>>;
+      /** Or a purpose, or a list of combination names. */
+      readonly combinations?: ModelCombinationSelection;
+      /** `"span/360"`, a length, or a list of them. */
+      readonly limit: ModelQuantity | readonly ModelQuantity[];
+    }[];
   };
 }

@@ -29,6 +29,25 @@ export type {
 } from "./section-types.js";
 export { MODEL_FORMAT_VERSION } from "./model.js";
 export type {
+  ModelPresetCombinations,
+  ModelCombinationEntry,
+  ModelSelfWeight,
+  ModelCombinationSelection,
+  ModelStressGroup,
+  ModelDeflectionGroup,
+  ModelCheckGroups,
+  ModelGoverningExtreme,
+  ModelEnvelopeBound,
+  ModelEnvelope,
+  ModelGoverningReaction,
+  ModelReactionEnvelope,
+  ModelReactionRange,
+  ModelEnvelopes,
+  ModelCombinationCheck,
+  ModelCombinationCheckRow,
+  ModelCombinationResults,
+} from "./combination-types.js";
+export type {
   ModelAnalysis,
   ModelResults,
   ModelExtreme,

@@ -4,6 +4,7 @@
  * JSON `type` tags renamed to `kind` (a JSON `"moment"` load becomes a `"couple"`).
  */
 
+import type { LoadCase, ModelCheckGroups, ModelCombinationEntry, ModelSelfWeight, PatternOptions } from "./combination-types.js";
 import type { ModelSection } from "./section-types.js";
 
 /** The model-file format version this release writes and reads. */
@@ -198,8 +199,20 @@ export interface Model {
   readonly supports: readonly ModelSupport[];
   /** Positions of internal hinges, in the length unit. */
   readonly hinges: readonly number[];
-  /** The loads, in the order given; all act together with factor 1. */
+  /** The loads, in the order given; all act together with factor 1 in the main results, and by case in the combinations. */
   readonly loads: readonly ModelLoad[];
-  /** Limits to check against. */
+  /** Limits to check against (the loads all acting with factor 1). */
   readonly limits: ModelLimits;
+  /** The load cases; each load names its case (`case`). Needed for `combinations` and `checkGroups`. */
+  readonly cases?: readonly LoadCase[];
+  /** The case that holds the supports' settlements and prescribed rotations. */
+  readonly settlementCase?: string;
+  /** The member's own weight as a dead case (needs a `section`). */
+  readonly selfWeight?: ModelSelfWeight;
+  /** Presets and combinations written out; the analysis envelopes them all. */
+  readonly combinations?: readonly ModelCombinationEntry[];
+  /** The pattern search of patterned cases. */
+  readonly patterns?: PatternOptions;
+  /** Checks per combination: stress groups and deflection groups. */
+  readonly checkGroups?: ModelCheckGroups;
 }

@@ -1,7 +1,9 @@
 import { attempt, FlexuraError, issue, type FlexuraIssue, type Result } from "../errors/index.js";
 import { MODEL_FORMAT_VERSION, type Model } from "./model.js";
+import { readCombinationFields } from "./read-combinations.js";
 import { readHinges, readLimits, readLoads, readMaterial, readSegments, readSupports } from "./read-parts.js";
 import { readSection } from "./read-section.js";
+import { resolveCombinations } from "./resolve-combinations.js";
 import { objectAt, readQuantity, requirePositive, type Reader } from "./reader.js";
 import { resolveUnits, scaleOfUnits } from "./units.js";
 import { structuralIssues } from "./validate.js";
@@ -62,7 +64,10 @@ function buildModel(json: unknown): Model {
     hinges: readHinges(reader, file["hinges"], memberLength),
     loads: readLoads(reader, file["loads"], memberLength),
     limits: readLimits(reader, file["limits"]),
+    ...readCombinationFields(reader, file),
   };
+  // the meaning of cases, combinations and check groups, when their structure is sound
+  if (structure.length === 0) resolveCombinations(model, found);
   const all = [...structure, ...found];
   if (all.length > 0) throw new FlexuraError(all);
   return model;

@@ -121,8 +121,8 @@ export function readMaterial(reader: Reader, value: unknown, path: IssuePath = [
 
 const RATIO = /^\s*(?:span|L)\s*\/\s*([0-9]+(?:\.[0-9]*)?(?:[eE][+-]?[0-9]+)?)\s*$/;
 
-function readDeflectionLimit(reader: Reader, value: unknown): ModelDeflectionLimit | undefined {
-  const path = ["limits", "deflection"];
+/** Reads a deflection limit, `"span/360"` or a length, recording problems at `path`. */
+export function readDeflectionLimit(reader: Reader, value: unknown, path: IssuePath = ["limits", "deflection"]): ModelDeflectionLimit | undefined {
   if (typeof value === "string") {
     const ratio = RATIO.exec(value);
     if (ratio !== null) {

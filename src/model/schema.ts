@@ -1,5 +1,6 @@
 import { MODEL_FORMAT_VERSION } from "./model.js";
 import { definitions, MODEL_LIST_LIMIT } from "./schema-parts.js";
+import { combinationDefinitions, combinationProperties } from "./schema-combinations.js";
 import { sectionDefinitions } from "./schema-section.js";
 
 /** Freezes plain data and everything it holds, so that no caller can change what it shares. */
@@ -68,9 +69,10 @@ export const modelSchema: ModelJsonSchema = deepFreeze({
     material: { $ref: "#/$defs/material" },
     supports: { type: "array", minItems: 1, maxItems: MODEL_LIST_LIMIT, items: { $ref: "#/$defs/support" }, description: "The supports of the member." },
     hinges: { type: "array", maxItems: MODEL_LIST_LIMIT, items: { $ref: "#/$defs/length" }, description: "Positions of internal hinges (length unit)." },
-    loads: { type: "array", maxItems: MODEL_LIST_LIMIT, items: { $ref: "#/$defs/load" }, description: "The loads; all act together with factor 1." },
+    loads: { type: "array", maxItems: MODEL_LIST_LIMIT, items: { $ref: "#/$defs/load" }, description: "The loads; all act together with factor 1 in the main results, and by case in the combinations." },
     limits: { $ref: "#/$defs/limits" },
+    ...combinationProperties,
   },
   additionalProperties: false,
-  $defs: { ...definitions, ...sectionDefinitions },
+  $defs: { ...definitions, ...sectionDefinitions, ...combinationDefinitions },
 });

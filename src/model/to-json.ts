@@ -1,6 +1,7 @@
 import type { ModelFile, ModelFileLoad, ModelFileSupport } from "./file.js";
 import type { ModelFileMaterial, ModelFileSection, ModelFileSectionPart } from "./file-section.js";
-import type { Model, ModelLoad, ModelMaterial, ModelSupport } from "./model.js";
+import type { ModelCombinationEntry } from "./combination-types.js";
+import type { Model, ModelDeflectionLimit, ModelLoad, ModelMaterial, ModelSupport } from "./model.js";
 import type { ModelSection, ModelSectionPart } from "./section-types.js";
 
 const materialToJson = (m: ModelMaterial): ModelFileMaterial => ({ ...m });
@@ -97,5 +98,37 @@ export function modelToJson(model: Model): ModelFile {
       ...(limits.bendingStress === undefined ? {} : { bendingStress: limits.bendingStress }),
       ...(limits.shearStress === undefined ? {} : { shearStress: limits.shearStress }),
     },
+    ...combinationsToJson(model),
+  };
+}
+
+const limitToJson = (l: ModelDeflectionLimit): number | string => (l.kind === "ratio" ? `span/${l.ratio}` : l.value);
+
+/** The cases, combinations, patterns, self-weight and check groups of a model, as a model file writes them. */
+function combinationsToJson(model: Model): Pick<ModelFile, "cases" | "settlementCase" | "selfWeight" | "combinations" | "patterns" | "checkGroups"> {
+  const g = model.checkGroups;
+  return {
+    ...(model.cases === undefined ? {} : { cases: model.cases.map((c) => ({ ...c })) }),
+    ...(model.settlementCase === undefined ? {} : { settlementCase: model.settlementCase }),
+    ...(model.selfWeight === undefined ? {} : { selfWeight: { case: model.selfWeight.case, unitWeight: model.selfWeight.unitWeight } }),
+    ...(model.combinations === undefined ? {} : { combinations: model.combinations.map((c) => JSON.parse(JSON.stringify(c)) as ModelCombinationEntry) }),
+    ...(model.patterns === undefined ? {} : { patterns: { ...model.patterns } }),
+    ...(g === undefined
+      ? {}
+      : {
+          checkGroups: {
+            ...(g.stress === undefined ? {} : { stress: g.stress.map((s) => ({ ...s, combinations: typeof s.combinations === "string" ? s.combinations : [...s.combinations] })) }),
+            ...(g.deflection === undefined
+              ? {}
+              : {
+                  deflection: g.deflection.map((d) => ({
+                    name: d.name,
+                    ...(d.factors === undefined ? {} : { factors: { ...d.factors } }),
+                    ...(d.combinations === undefined ? {} : { combinations: typeof d.combinations === "string" ? d.combinations : [...d.combinations] }),
+                    limit: Array.isArray(d.limit) ? d.limit.map(limitToJson) : limitToJson(d.limit as ModelDeflectionLimit),
+                  })),
+                }),
+          },
+        }),
   };
 }

@@ -1,6 +1,7 @@
 import type { ModelAnalysis } from "../model/index.js";
 import { REPORT_CAUTION, wrapText } from "./caution.js";
 import { reportInputs } from "./text-inputs.js";
+import { reportCombinations } from "./text-combinations.js";
 import { reportChecks, reportForces, reportSection } from "./text-results.js";
 import { sha256Hex } from "./document/sha256.js";
 import { FLEXURA_VERSION } from "./document/version.js";
@@ -26,7 +27,9 @@ export interface TextReportOptions {
  * given, the input file's name and SHA-256), inputs echoed with their units,
  * reactions, peaks of shear, moment, slope and deflection with their locations, section
  * properties, extreme bending stresses, checks with utilisation and PASS/FAIL, warnings, and the
- * caution. Every value is in the model's own units, named beside it. Pure: no I/O.
+ * caution; with load cases, the combination table (every factor applied, with its clause), the
+ * envelopes' peaks naming the governing combination and pattern, the reaction envelopes and the
+ * checks per combination. Every value is in the model's own units, named beside it. Pure: no I/O.
  *
  * @param analysis - What `analyzeModel` returned.
  * @param options - Layout.
@@ -49,5 +52,7 @@ export function textReport(analysis: ModelAnalysis, options: TextReportOptions =
   const section = reportSection(analysis);
   if (section !== "") parts.push(section);
   parts.push(reportChecks(analysis));
+  const combinations = reportCombinations(analysis);
+  if (combinations !== "") parts.push(combinations);
   return `${parts.join("\n\n")}\n`;
 }
