@@ -49,9 +49,9 @@ export async function renderExampleSheets(out = join(ROOT, "reports", "sheets"))
   const { analyzeModel, parseModel } = await import(pathToFileURL(join(ROOT, "dist", "model.js")).href);
   const { calculationSheet } = await import(pathToFileURL(join(ROOT, "dist", "report.js")).href);
   mkdirSync(out, { recursive: true });
-  const folder = join(ROOT, "examples", "models");
   const results = [];
-  for (const file of readdirSync(folder).filter((f) => f.endsWith(".json")).sort()) {
+  const folders = [join(ROOT, "examples", "models"), join(ROOT, "examples", "combinations")].filter((f) => existsSync(f));
+  for (const [folder, file] of folders.flatMap((d) => readdirSync(d).filter((f) => f.endsWith(".json")).sort().map((f) => [d, f]))) {
     const bytes = readFileSync(join(folder, file));
     const analysis = analyzeModel(parseModel(JSON.parse(bytes.toString("utf8"))));
     const name = basename(file, ".json");
@@ -62,7 +62,7 @@ export async function renderExampleSheets(out = join(ROOT, "reports", "sheets"))
     const pages = pageCount(pdf);
     execFileSync("pdftoppm", ["-r", "110", "-png", pdf, join(out, name)], { stdio: "ignore" });
     const pngs = readdirSync(out).filter((f) => f.startsWith(`${name}-`) && f.endsWith(".png")).map((f) => join(out, f));
-    results.push({ model: file, html, pdf, pages, pngs });
+    results.push({ model: file, text: bytes.toString("utf8"), html, pdf, pages, pngs });
   }
   return results;
 }

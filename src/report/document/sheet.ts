@@ -131,7 +131,7 @@ function memberPage(analysis: ModelAnalysis, options: CalculationSheetOptions): 
   if (figure.simplified) {
     out.push(`<p class="warning" data-flag="figure-simplified">The figure is simplified for a member with ${model.supports.length} supports and ${model.loads.length} loads: labels other than the peaks are left out; the tables give every value.</p>`);
   }
-  out.push(figureBlock(figure, figureHeight(analysis, figure)));
+  out.push(figureBlock(figure, figureHeight(analysis, figure), analysis.combinations !== undefined));
   out.push(`<div class="columns">`);
   const [left, right] = columnLines(analysis);
   if (left <= right) {
@@ -143,6 +143,7 @@ function memberPage(analysis: ModelAnalysis, options: CalculationSheetOptions): 
   }
   out.push(`</div>`);
   out.push(checks(analysis, plain, notes));
+  out.push(combinationsBlock(analysis, plain, notes));
   if (notes.items.length > 0) {
     out.push(`<section class="notes" id="notes"><h2>Notes</h2><ol>${notes.items.map((n) => `<li>${escapeXml(n)}</li>`).join("")}</ol></section>`);
   }
@@ -254,6 +255,8 @@ function limitsText(model: Model, plain: boolean): string {
   if (l.deflection !== undefined) parts.push(l.deflection.kind === "ratio" ? `deflection span/${formatReportNumber(l.deflection.ratio)}` : `deflection ${q(l.deflection.value, u.deflection, plain)}`);
   if (l.bendingStress !== undefined) parts.push(`allowable bending stress ${q(l.bendingStress, u.stress, plain)}`);
   if (l.shearStress !== undefined) parts.push(`allowable shear stress ${q(l.shearStress, u.stress, plain)}`);
+  const groups = [...(model.checkGroups?.stress ?? []), ...(model.checkGroups?.deflection ?? [])].map((g) => g.name);
+  if (groups.length > 0) parts.push(`check groups on the combinations: ${groups.map((g) => escapeXml(g)).join(", ")} (section 5)`);
   return parts.length === 0 ? "None given: nothing is checked." : parts.join("; ");
 }
 
@@ -328,12 +331,16 @@ function results(analysis: ModelAnalysis, plain: boolean): string {
 /**
  * The printed height of the figure (mm), shrunk from 84 mm as the tables grow so that an ordinary
  * member still prints on one page: an estimate of the text lines of the taller column, the checks and
- * the list of unlabelled values, about 3 mm each at the sheet's type size, against what the page leaves.
+ * the list of unlabelled values, about 3 mm each at the sheet's type size, against what the page leaves
+ * (never below 58 mm, so the figure stays legible). A model with combinations gets a second page for them.
  */
 function figureHeight(analysis: ModelAnalysis, figure: CalculationFigure): number {
   const [left, right] = columnLines(analysis);
   const method = 10;
-  const lines = Math.max(left + (left <= right ? method : 0), right + (left <= right ? 0 : method)) + analysis.checks.length + 4 + analysis.warnings.length;
+  // The combinations section starts its own page; only the check groups' summary stays on the first.
+  const groups = new Set((analysis.combinations?.checks ?? []).map((r) => r.group)).size;
+  const combined = groups === 0 ? 0 : 3 + groups;
+  const lines = Math.max(left + (left <= right ? method : 0), right + (left <= right ? 0 : method)) + analysis.checks.length + 4 + analysis.warnings.length + combined;
   const unplaced = figure.unplaced.length === 0 ? 0 : Math.ceil(figure.unplaced.join("; ").length / 150);
   return Math.round(Math.max(58, Math.min(84, 84 - (lines + unplaced - 48) * 3.2)));
 }
@@ -352,27 +359,46 @@ function columnLines(analysis: ModelAnalysis): readonly [number, number] {
   return [left, right];
 }
 
-function figureBlock(figure: CalculationFigure, heightMm: number): string {
+function figureBlock(figure: CalculationFigure, heightMm: number, combined: boolean): string {
   const missing =
     figure.unplaced.length === 0
       ? ""
       : `<p class="unplaced">Values not labelled on the figure for want of room: ${figure.unplaced.map((t) => escapeXml(t)).join("; ")}.</p>`;
-  return `<section id="figure"><h2>1 Figure</h2><figure style="--figure-height:${heightMm}mm">${figure.svg}<figcaption>Member, shear, moment and deflection on one x axis; faint guides carry supports, hinges and load positions down through the plots.</figcaption></figure>${missing}</section>`;
+  return `<section id="figure"><h2>1 Figure</h2><figure style="--figure-height:${heightMm}mm">${figure.svg}<figcaption>Member, shear, moment and deflection on one x axis; faint guides carry supports, hinges and load positions down through the plots.${combined ? " <strong>Every load at factor 1</strong> (all cases together, unfactored), here and in the results below; the factored combinations and their envelopes are in section 6." : ""}</figcaption></figure>${missing}</section>`;
+}
+
+/** One verdict line over the model's own checks and the checks per combination. */
+interface VerdictItem {
+  readonly description: string;
+  readonly utilisation: number;
+  readonly pass: boolean;
+}
+
+function verdictItems(analysis: ModelAnalysis): readonly VerdictItem[] {
+  const own: VerdictItem[] = analysis.checks.map((c) => ({ description: c.description, utilisation: c.utilisation, pass: c.pass }));
+  for (const row of analysis.combinations?.checks ?? []) {
+    for (const c of row.checks) own.push({ description: `${c.description} under ${row.combination}${c.pattern === "" ? "" : `, ${c.pattern}`} (${row.group})`, utilisation: c.utilisation, pass: c.pass });
+  }
+  return own;
 }
 
 function checks(analysis: ModelAnalysis, plain: boolean, notes: Notes): string {
   const list: readonly ModelCheck[] = analysis.checks;
+  const all = verdictItems(analysis);
   const out: string[] = [`<section id="checks"><h2>5 Checks</h2>`];
-  if (list.length === 0) {
+  if (all.length === 0) {
     out.push(`<p class="verdict not-checked" data-verdict="not-checked"><strong>NOT CHECKED</strong>: the model gives no limits, so no check was run and no pass is claimed.</p>`);
   } else {
-    const failed = list.filter((c) => !c.pass).length;
-    const governing = list.reduce((a, b) => (b.utilisation > a.utilisation ? b : a));
+    const failed = all.filter((c) => !c.pass).length;
+    const governing = all.reduce((a, b) => (b.utilisation > a.utilisation ? b : a));
     out.push(
       failed === 0
-        ? `<p class="verdict pass" data-verdict="pass"><strong>PASS</strong>: ${list.length === 1 ? "the one check passes" : `all ${list.length} checks pass`}; the largest utilisation is ${utilisationText(governing.utilisation)} (${escapeXml(governing.description)}).</p>`
-        : `<p class="verdict fail" data-verdict="fail"><strong>FAIL</strong>: ${list.length === 1 ? "the one check fails" : `${failed} of ${list.length} checks fail`}; the largest utilisation is ${utilisationText(governing.utilisation)} (${escapeXml(governing.description)}).</p>`,
+        ? `<p class="verdict pass" data-verdict="pass"><strong>PASS</strong>: ${all.length === 1 ? "the one check passes" : `all ${all.length} checks pass`}; the largest utilisation is ${utilisationText(governing.utilisation)} (${escapeXml(governing.description)}).</p>`
+        : `<p class="verdict fail" data-verdict="fail"><strong>FAIL</strong>: ${all.length === 1 ? "the one check fails" : `${failed} of ${all.length} checks fail`}; the largest utilisation is ${utilisationText(governing.utilisation)} (${escapeXml(governing.description)}).</p>`,
     );
+  }
+  if (list.length > 0) {
+    if (analysis.combinations !== undefined) out.push(`<h3>Against the model's limits, every load at factor 1</h3>`);
     out.push(
       table(
         ["#", "check", "demand", "limit", "utilisation", "verdict"],
@@ -380,8 +406,90 @@ function checks(analysis: ModelAnalysis, plain: boolean, notes: Notes): string {
       ),
     );
   }
+  const rows = analysis.combinations?.checks ?? [];
+  if (rows.length > 0) {
+    // One line per check group: its governing combination and check; the full table per combination is in the
+    // text report and the JSON (`combinations.checks`).
+    const groups = new Map<string, (typeof rows)[number][]>();
+    for (const r of rows) groups.set(r.group, [...(groups.get(r.group) ?? []), r]);
+    out.push(`<h3>Per combination: the governing combination of each check group (each check at its worst pattern)</h3>`);
+    out.push(
+      table(
+        ["group", "combinations", "failing", "governing combination", "governing check", "demand", "limit", "utilisation", "verdict"],
+        [...groups].map(([name, list]) => {
+          const r = list.reduce((x, y) => (y.utilisation > x.utilisation ? y : x));
+          const c = r.checks[r.governing];
+          const failing = list.filter((x) => !x.pass).length;
+          return [
+            notes.short(name),
+            String(list.length),
+            String(failing),
+            notes.short(r.combination),
+            c === undefined ? "" : notes.short(`${c.description}${c.pattern === "" ? "" : `, ${c.pattern}`}`),
+            c === undefined ? "" : q(c.demand, c.unit, plain),
+            c === undefined ? "" : q(c.capacity, c.unit, plain),
+            utilisationText(r.utilisation),
+            failing === 0 ? "pass" : "<strong>FAIL</strong>",
+          ];
+        }),
+        "many",
+      ),
+    );
+  }
   if (analysis.warnings.length > 0) {
     out.push(`<h3>Warnings</h3><ul class="warnings">${analysis.warnings.map((w) => `<li><code>${escapeXml(w.code)}</code>: ${escapeXml(w.message)}</li>`).join("")}</ul>`);
+  }
+  out.push(`</section>`);
+  return out.join("\n");
+}
+
+function factorsText(factors: Readonly<Record<string, number>>): string {
+  return Object.entries(factors)
+    .map(([name, f]) => `${formatReportNumber(f)} ${name}`)
+    .join(" + ");
+}
+
+/** The combinations applied, the envelopes with the governing combination, and the reaction envelopes. */
+function combinationsBlock(analysis: ModelAnalysis, plain: boolean, notes: Notes): string {
+  const c = analysis.combinations;
+  if (c === undefined) return "";
+  const u = analysis.units;
+  const out: string[] = [`<section id="combinations"><h2>6 Combinations and envelopes</h2>`];
+  out.push(`<p>${c.combinations.length} combination${c.combinations.length === 1 ? "" : "s"}, ${c.arrangements} arrangement${c.arrangements === 1 ? "" : "s"} with patterns; cases: ${c.cases.map((k) => escapeXml(`${k.name} (${k.category})`)).join(", ")}.</p>`);
+  if (c.notes.length > 0) out.push(`<ul class="notes-list">${c.notes.map((n) => `<li>${escapeXml(n)}</li>`).join("")}</ul>`);
+  const pairs: string[][] = [];
+  for (let i = 0; i < c.combinations.length; i += 2) {
+    const row: string[] = [];
+    for (const k of [i, i + 1]) {
+      const m = c.combinations[k];
+      row.push(m === undefined ? "" : String(k + 1), m === undefined ? "" : notes.short(`${factorsText(m.factors)} (${m.purpose})`), m === undefined ? "" : escapeXml(m.clause ?? ""));
+    }
+    pairs.push(row);
+  }
+  out.push(table(["#", "factors (purpose)", "clause", "#", "factors (purpose)", "clause"], pairs, "many"));
+  const e = c.envelopes;
+  if (e !== undefined) {
+    const line = (name: string, env: typeof e.shear, unit: string): string[] => [
+      name,
+      q(env.upper.peak.value, unit, plain),
+      q(env.upper.peak.at, u.length, plain),
+      notes.short(env.upper.peak.combination),
+      q(env.lower.peak.value, unit, plain),
+      q(env.lower.peak.at, u.length, plain),
+      notes.short(env.lower.peak.combination),
+    ];
+    out.push(`<h3>Envelope peaks (exact; crossings of combinations found as roots)</h3>`);
+    out.push(table(["quantity", "largest", "at x", "governed by", "smallest", "at x", "governed by"], [line("shear V", e.shear, u.force), line("moment M", e.moment, u.moment), line("deflection", e.deflection, u.deflection)], "many"));
+  }
+  if (c.reactions !== undefined) {
+    out.push(`<h3>Reaction envelopes (up +; a negative smallest value is uplift)</h3>`);
+    out.push(
+      table(
+        ["support", "at", "largest", "governed by", "smallest", "governed by"],
+        c.reactions.map((r) => [String(r.support + 1), q(r.at, u.length, plain), q(r.force.max.value, u.force, plain), notes.short(r.force.max.combination), q(r.force.min.value, u.force, plain), notes.short(r.force.min.combination)]),
+        "many",
+      ),
+    );
   }
   out.push(`</section>`);
   return out.join("\n");
@@ -427,6 +535,7 @@ function css(paper: "a4" | "letter"): string {
     `figure svg{display:block;margin:0 auto;width:100%;height:auto;max-height:var(--figure-height,84mm)}`,
     `figcaption{font-size:6.5pt;color:#333}`,
     `.section-figure{margin:1pt 0}`,
+    `#combinations{break-before:page;page-break-before:always}`,
     `.section-figure svg{max-height:46mm}`,
     `.verdict{font-size:9pt;margin-top:3pt}`,
     `.caution{margin-top:3pt}`,

@@ -1,6 +1,6 @@
 // Shared fixtures for the calculation-sheet tests: every example model analysed, and a builder of
 // random valid members for the label-placement properties.
-import { readFileSync, readdirSync } from "node:fs";
+import { existsSync, readFileSync, readdirSync } from "node:fs";
 import { join, resolve } from "node:path";
 import fc from "fast-check";
 import { analyzeModel, parseModel, type ModelAnalysis } from "../../../src/model/index.js";
@@ -15,14 +15,19 @@ export interface Example {
   readonly analysis: ModelAnalysis;
 }
 
+/** Folders of example models: single members, and members with load combinations. */
+export const EXAMPLE_FOLDERS = [EXAMPLES, join(ROOT, "examples", "combinations")].filter((f) => existsSync(f));
+
 export function examples(): readonly Example[] {
-  return readdirSync(EXAMPLES)
-    .filter((f) => f.endsWith(".json"))
-    .sort()
-    .map((file) => {
-      const text = readFileSync(join(EXAMPLES, file), "utf8");
-      return { file, text, analysis: analyzeModel(parseModel(JSON.parse(text) as unknown)) };
-    });
+  return EXAMPLE_FOLDERS.flatMap((folder) =>
+    readdirSync(folder)
+      .filter((f) => f.endsWith(".json"))
+      .sort()
+      .map((file) => {
+        const text = readFileSync(join(folder, file), "utf8");
+        return { file, text, analysis: analyzeModel(parseModel(JSON.parse(text) as unknown)) };
+      }),
+  );
 }
 
 /** A random member of 1 to 4 spans, with point, distributed and couple loads, in the default units. */

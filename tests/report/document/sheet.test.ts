@@ -19,11 +19,11 @@ function externalReferences(html: string): string[] {
 describe("calculationSheet", () => {
   it("has every section, the caution, the program version and the input's SHA-256 (node:crypto as the reference), and nothing external", () => {
     for (const e of examples()) {
-      const html = calculationSheet(e.analysis, { input: { name: e.file, bytes: readFileSync(join(ROOT, "examples", "models", e.file)) } });
+      const html = calculationSheet(e.analysis, { input: { name: e.file, bytes: e.text } });
       for (const id of SECTIONS) expect(html, `${e.file}: ${id}`).toMatch(new RegExp(`id="${id}"`));
       expect(externalReferences(html)).toEqual([]);
       expect(html).toContain(`flexura ${FLEXURA_VERSION}`);
-      expect(html).toContain(createHash("sha256").update(readFileSync(join(ROOT, "examples", "models", e.file))).digest("hex"));
+      expect(html).toContain(createHash("sha256").update(e.text, "utf8").digest("hex"));
       expect(html).toContain(e.file);
       expect(html).toContain("Local codes govern.");
       expect(html).toMatch(/Euler–Bernoulli/);
@@ -126,5 +126,28 @@ describe("textReport header", () => {
     const text = textReport(first!.analysis, { input: { name: first!.file, bytes: first!.text } });
     expect(text).toContain(`Program: flexura ${FLEXURA_VERSION}`);
     expect(text).toContain(`Input: ${first!.file} (SHA-256 ${createHash("sha256").update(first!.text, "utf8").digest("hex")})`);
+  });
+});
+
+describe("calculationSheet with load combinations", () => {
+  const combined = examples().filter((e) => e.analysis.combinations !== undefined);
+
+  it("has the combinations, the envelope peaks with their governing combination, and a verdict over every check group", () => {
+    expect(combined.length).toBeGreaterThanOrEqual(1);
+    for (const e of combined) {
+      const c = e.analysis.combinations!;
+      const html = calculationSheet(e.analysis);
+      expect(html).toContain('id="combinations"');
+      expect(html).toContain("Every load at factor 1");
+      for (const k of c.combinations) if (k.clause !== undefined) expect(html).toContain(k.clause);
+      if (c.envelopes !== undefined) expect(html).toContain(c.envelopes.moment.upper.peak.combination);
+      const rows = c.checks.flatMap((r) => r.checks);
+      const own = e.analysis.checks.length;
+      const verdict = /data-verdict="(pass|fail|not-checked)"><strong>[A-Z ]+<\/strong>: (?:all (\d+) checks pass|(\d+) of (\d+) checks fail|the one check (?:passes|fails))/.exec(html);
+      expect(verdict).not.toBeNull();
+      const total = Number(verdict![2] ?? verdict![4] ?? 1);
+      expect(total).toBe(own + rows.length);
+      expect(verdict![1]).toBe(e.analysis.pass ? "pass" : "fail");
+    }
   });
 });
