@@ -13,3 +13,7 @@ export type { MemberCheck } from "./member.js";
 export { checkMember, tryCheckMember } from "./member.js";
 export type { SingleCheckOptions, DeflectionCheckOptions } from "./single.js";
 export { checkBendingStress, tryCheckBendingStress, checkShearStress, tryCheckShearStress, checkDeflection, tryCheckDeflection } from "./single.js";
+export type { StressLimits, StressCheckGroup, DeflectionCheckGroup, CombinationCheckGroups, CombinationCheckOptions, GoverningCheck, CombinationCheckRow, LoadCombinationChecks } from "./combination-checks.js";
+export { checkLoadCombinations, tryCheckLoadCombinations } from "./combination-checks.js";
+export type { SelfWeightStretch, SelfWeightOptions, SelfWeight } from "./self-weight.js";
+export { selfWeight, trySelfWeight } from "./self-weight.js";

@@ -1,4 +1,6 @@
 import type { BeamSolution } from "../beam/index.js";
+import { describeValue, fail } from "../errors/index.js";
+import { coincidenceTolerance } from "../math/index.js";
 import type { Extremes, PiecewisePolynomial } from "../math/index.js";
 import type { ModelDiagram, ModelDiagramPiece, ModelDiagrams, ModelPeaks, ModelScale } from "./analysis.js";
 import type { ModelUnits } from "./model.js";
@@ -42,30 +44,63 @@ export function peaksInModelUnits(peaks: Extremes, lengthScale: number, valueSca
 }
 
 /**
- * Evaluates a diagram of {@link analyzeModel}'s results at `x` (length unit). At a break where
- * the diagram jumps (shear under a point load), `side` picks the limit from the left or the right.
+ * Evaluates a diagram of {@link analyzeModel}'s results at `x` (length unit), with the reading
+ * rules of the math layer's `evaluatePiecewise` (docs/tolerances.md): at a break where the diagram
+ * jumps (shear under a point load), `side` picks the limit from the left or the right; without a
+ * side, the right limit, except at the last break, where it is the left one (the value on the
+ * member at each end). A side pointing off the member (`"left"` at the first break, `"right"` at
+ * the last) gives 0: a diagram is zero off its member, so the jump at an end is the end's
+ * reaction. A position within the coincidence tolerance (1e-9 of the diagram's length) past an
+ * end is at that end; further out is refused.
  *
  * @param diagram - A diagram from `ModelAnalysis.diagrams`.
  * @param x - Position from the left end, in the model's length unit, within the member.
- * @param side - `"left"` or `"right"` (default) limit at a break.
- * @returns The value in `diagram.unit`; NaN is never returned: x outside the member gives the nearest end's value.
+ * @param side - `"left"` or `"right"` limit at a break; default as above.
+ * @returns The value in `diagram.unit`.
+ * @throws FlexuraError `outside-domain` (x NaN, or outside the member by more than the tolerance),
+ *   `not-a-number` (x not a number), `unknown-side`, `diagram-invalid` (no pieces, or pieces whose
+ *   ends are not finite and increasing).
  * @example
  * ```ts
  * const a = analyzeModel(parseModel(file));
  * evaluateDiagram(a.diagrams.moment, 2.5); // bending moment at x = 2.5, in a.units.moment
+ * evaluateDiagram(a.diagrams.shear, 0, "left"); // 0: off the member
  * ```
  */
-export function evaluateDiagram(diagram: ModelDiagram, x: number, side: "left" | "right" = "right"): number {
-  const pieces = diagram.pieces;
-  let index = 0;
-  for (let i = 0; i < pieces.length; i++) {
-    const p = pieces[i] as ModelDiagramPiece;
-    if (side === "right" ? x >= p.from : x > p.from) index = i;
+export function evaluateDiagram(diagram: ModelDiagram, x: number, side?: "left" | "right"): number {
+  const pieces: readonly ModelDiagramPiece[] = typeof diagram === "object" && diagram !== null && Array.isArray(diagram.pieces) ? diagram.pieces : [];
+  const first = pieces[0];
+  const last = pieces[pieces.length - 1];
+  if (first === undefined || last === undefined || !(Number.isFinite(first.from) && Number.isFinite(last.to) && last.to >= first.from))
+    fail("diagram-invalid", ["diagram"], `A diagram is { unit, pieces: [{ from, to, coefficients }] } with at least one piece, its ends finite and increasing; got ${describeValue(diagram)}.`);
+  if (side !== undefined && side !== "left" && side !== "right") fail("unknown-side", ["side"], `The side is "left" or "right"; got ${describeValue(side)}.`);
+  if (typeof x !== "number") fail("not-a-number", ["x"], `The position x is a number in the model's length unit; got ${describeValue(x)}.`);
+  const x0 = first.from;
+  const x1 = last.to;
+  const slack = coincidenceTolerance(x1 - x0);
+  if (!(x >= x0 - slack && x <= x1 + slack)) fail("outside-domain", ["x"], `x = ${x} lies outside the member, [${x0}, ${x1}].`, { x });
+  if (x <= x0) {
+    if (side === "left") return 0;
+    return polynomialValue(first.coefficients, 0);
   }
-  const piece = pieces[index];
-  if (piece === undefined) return 0;
-  const t = Math.min(Math.max(x, piece.from), piece.to) - piece.from;
+  if (x >= x1) {
+    if (side === "right") return 0;
+    return polynomialValue(last.coefficients, x1 - last.from);
+  }
+  // the piece holding x: the last that starts before x (at x itself for the right limit)
+  let index = 0;
+  for (let i = 1; i < pieces.length; i++) {
+    const p = pieces[i] as ModelDiagramPiece;
+    if (side === "left" ? x > p.from : x >= p.from) index = i;
+    else break;
+  }
+  const piece = pieces[index] as ModelDiagramPiece;
+  return polynomialValue(piece.coefficients, Math.min(Math.max(x, piece.from), piece.to) - piece.from);
+}
+
+/** sum c_k t^k by Horner's rule. */
+function polynomialValue(coefficients: readonly number[], t: number): number {
   let value = 0;
-  for (let k = piece.coefficients.length - 1; k >= 0; k--) value = value * t + (piece.coefficients[k] ?? 0);
+  for (let k = coefficients.length - 1; k >= 0; k--) value = value * t + (coefficients[k] ?? 0);
   return value;
 }

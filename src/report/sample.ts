@@ -1,4 +1,4 @@
-import type { ModelDiagram } from "../model/index.js";
+import { evaluateDiagram, type ModelDiagram } from "../model/index.js";
 
 /** How densely to sample a diagram for drawing. */
 export interface SampleDiagramOptions {
@@ -72,32 +72,23 @@ export function evaluatePolynomial(coefficients: readonly number[], u: number): 
 }
 
 /**
- * The value of a diagram at `x` from the left (`side: "left"`) or the right (`"right"`, the
- * default) at a breakpoint; outside the member, the nearest end value.
+ * The value of a diagram at `x`: the model's `evaluateDiagram` (one reading rule for the whole
+ * library, docs/tolerances.md): the left (`side: "left"`) or right (`"right"`) limit at a
+ * breakpoint; without a side the right limit, except at the last breakpoint (the value on the
+ * member); a side pointing off the member at an end gives 0; a position within the coincidence
+ * tolerance past an end is at the end, and further out is refused.
  *
+ * @throws FlexuraError `outside-domain`, `not-a-number`, `unknown-side`, `diagram-invalid` (see `evaluateDiagram`).
  * @example
  * ```ts
  * const d = { unit: "kN", pieces: [{ from: 0, to: 2, coefficients: [5] }, { from: 2, to: 4, coefficients: [-5] }] };
  * diagramValueAt(d, 2, "left"); // 5
  * diagramValueAt(d, 2);         // -5
+ * diagramValueAt(d, 4, "right"); // 0 (off the member)
  * ```
  */
-export function diagramValueAt(diagram: ModelDiagram, x: number, side: "left" | "right" = "right"): number {
-  const pieces = diagram.pieces;
-  if (pieces.length === 0) return 0;
-  let chosen = pieces[pieces.length - 1];
-  for (const piece of pieces) {
-    const inside = side === "left" ? x > piece.from && x <= piece.to : x >= piece.from && x < piece.to;
-    if (inside) {
-      chosen = piece;
-      break;
-    }
-  }
-  const first = pieces[0];
-  if (first !== undefined && x <= first.from) chosen = first;
-  if (chosen === undefined) return 0;
-  const u = Math.min(Math.max(x, chosen.from), chosen.to) - chosen.from;
-  return evaluatePolynomial(chosen.coefficients, u);
+export function diagramValueAt(diagram: ModelDiagram, x: number, side?: "left" | "right"): number {
+  return evaluateDiagram(diagram, x, side);
 }
 
 function dropRepeats(points: readonly (readonly [number, number])[]): readonly (readonly [number, number])[] {

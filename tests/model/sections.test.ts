@@ -108,14 +108,23 @@ describe("analyzeModel with segments", () => {
 });
 
 describe("evaluateDiagram", () => {
-  it("takes the left or right limit at a jump and clamps outside the member", () => {
+  it("takes the left or right limit at a jump, reads 0 off the member at an end and refuses beyond the tolerance", () => {
     const a = analyzeModel(parseModel({ length: 4, E: 1e6, I: 1e6, supports: [{ at: 0, type: "pin" }, { at: 4, type: "roller" }], loads: [{ type: "point", at: 1, value: 8 }] }));
     // Simple span, point load P at a: V = P b / L left of the load, -P a / L right of it (AISC Manual 15th ed., Table 3-23 case 8).
     near(evaluateDiagram(a.diagrams.shear, 1, "left"), 6);
     near(evaluateDiagram(a.diagrams.shear, 1, "right"), -2);
     near(evaluateDiagram(a.diagrams.moment, 1), 6);
-    near(evaluateDiagram(a.diagrams.moment, 5), 0);
-    expect(evaluateDiagram({ unit: "kN", pieces: [] }, 1)).toBe(0);
+    near(evaluateDiagram(a.diagrams.moment, 4), 0);
+    near(evaluateDiagram(a.diagrams.shear, 0), 6);
+    expect(evaluateDiagram(a.diagrams.shear, 0, "left")).toBe(0);
+    near(evaluateDiagram(a.diagrams.shear, 4), -2);
+    near(evaluateDiagram(a.diagrams.shear, 4, "left"), -2);
+    expect(evaluateDiagram(a.diagrams.shear, 4, "right")).toBe(0);
+    near(evaluateDiagram(a.diagrams.shear, 4 + 1e-9), -2);
+    expect(() => evaluateDiagram(a.diagrams.moment, 5)).toThrow(expect.objectContaining({ issues: [expect.objectContaining({ code: "outside-domain", path: ["x"] })] }));
+    expect(() => evaluateDiagram(a.diagrams.moment, Number.NaN)).toThrow(expect.objectContaining({ issues: [expect.objectContaining({ code: "outside-domain" })] }));
+    expect(() => evaluateDiagram(a.diagrams.moment, 1, "up" as "left")).toThrow(expect.objectContaining({ issues: [expect.objectContaining({ code: "unknown-side" })] }));
+    expect(() => evaluateDiagram({ unit: "kN", pieces: [] }, 1)).toThrow(expect.objectContaining({ issues: [expect.objectContaining({ code: "diagram-invalid" })] }));
   });
 });
 

@@ -53,12 +53,15 @@ describe("evaluatePolynomial and diagramValueAt", () => {
     expect(evaluatePolynomial([1, 0, 2], 3)).toBe(19);
     expect(evaluatePolynomial([], 3)).toBe(0);
   });
-  test("diagramValueAt takes the left or right limit at a jump and clamps outside the member", () => {
+  test("diagramValueAt takes the left or right limit at a jump, 0 off the member at an end, and refuses beyond", () => {
     expect(diagramValueAt(shear, 2, "left")).toBe(5);
     expect(diagramValueAt(shear, 2)).toBe(-5);
     expect(diagramValueAt(shear, 4)).toBe(-5);
-    expect(diagramValueAt(shear, -1)).toBe(5);
-    expect(diagramValueAt(shear, 9)).toBe(-5);
-    expect(diagramValueAt({ unit: "", pieces: [] }, 1)).toBe(0);
+    expect(diagramValueAt(shear, 4, "right")).toBe(0);
+    expect(diagramValueAt(shear, 0, "left")).toBe(0);
+    expect(diagramValueAt(shear, -1e-12)).toBe(5);
+    expect(() => diagramValueAt(shear, -1)).toThrow(expect.objectContaining({ issues: [expect.objectContaining({ code: "outside-domain" })] }));
+    expect(() => diagramValueAt(shear, 9)).toThrow(expect.objectContaining({ issues: [expect.objectContaining({ code: "outside-domain" })] }));
+    expect(() => diagramValueAt({ unit: "", pieces: [] }, 1)).toThrow(expect.objectContaining({ issues: [expect.objectContaining({ code: "diagram-invalid" })] }));
   });
 });
