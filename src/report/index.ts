@@ -11,3 +11,31 @@ export { reportInputs } from "./text-inputs.js";
 export { reportForces, reportSection, reportChecks } from "./text-results.js";
 export { textReport, type TextReportOptions } from "./text-report.js";
 export { reportDiagrams, type ReportDiagram, type ReportDiagramName, type ReportDiagramsOptions } from "./diagrams.js";
+export {
+  calculationSheet,
+  calculationBook,
+  utilisationText,
+  calculationFigure,
+  figureDocument,
+  placeLabels,
+  textBox,
+  boxesOverlap,
+  defaultCandidates,
+  LABEL_FONT,
+  CHARACTER_ADVANCE,
+  sha256Hex,
+  printedUnit,
+  FLEXURA_VERSION,
+  type CalculationSheetJob,
+  type CalculationSheetInput,
+  type CalculationSheetOptions,
+  type CalculationBookMember,
+  type CalculationFigure,
+  type CalculationFigureOptions,
+  type LabelBox,
+  type LabelAnchor,
+  type LabelCandidate,
+  type LabelRequest,
+  type PlacedLabel,
+  type LabelPlacement,
+} from "./document/index.js";
