@@ -22,7 +22,7 @@ const KiB = 1024;
 // budget deliberately, with the new figure in docs/performance.md, never by habit.
 const paths = [
   { name: "solveBeam (README's first example)", code: `export { solveBeam } from ${dist("index.js")};`, budget: 15 * KiB },
-  { name: "sections alone (flexura/section)", code: `export * from ${dist("section.js")};`, budget: 18 * KiB },
+  { name: "sections alone (flexura/section)", code: `export * from ${dist("section.js")};`, budget: 23 * KiB },
   { name: "checkMember (flexura/check)", code: `export { checkMember } from ${dist("check.js")};`, budget: 25 * KiB },
   { name: "flexura/combine (cases, presets, envelopes)", code: `export * from ${dist("combine.js")};`, budget: 24 * KiB },
   { name: "flexura/moving (influence lines, moving loads)", code: `export * from ${dist("moving.js")};`, budget: 20 * KiB },

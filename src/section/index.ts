@@ -41,3 +41,16 @@ export { torsionConstantThinWalled, tryTorsionConstantThinWalled } from "./torsi
 export type { PartOutline, OutlinesOptions } from "./outlines.js";
 export { outlines, tryOutlines } from "./outlines.js";
 export { connectedPieces, tryConnectedPieces } from "./connected.js";
+export type { WallPlate, WallModel } from "./wallModel.js";
+export { centreLineModel, tryCentreLineModel } from "./centreLine.js";
+export type { SectorialPoint, OpenSectionProperties } from "./openSection.js";
+export { openSectionProperties, tryOpenSectionProperties } from "./openSection.js";
+export type { ClosedSectionTorsion } from "./closedTorsion.js";
+export { closedSectionTorsion, tryClosedSectionTorsion } from "./closedTorsion.js";
+export type { ExactTorsion } from "./torsionExact.js";
+export { torsionConstantExact, tryTorsionConstantExact } from "./torsionExact.js";
+export { torsionConstantRolledI, torsionConstantRolledTee, tryTorsionConstantRolledI, tryTorsionConstantRolledTee } from "./torsionRolled.js";
+export type { PrincipalSides, PrincipalBending, PrincipalAxisProperties } from "./principalModuli.js";
+export { principalAxisProperties, tryPrincipalAxisProperties } from "./principalModuli.js";
+export type { FullyPlasticMoments } from "./fullyPlastic.js";
+export { fullyPlasticMoments, tryFullyPlasticMoments } from "./fullyPlastic.js";

@@ -50,10 +50,10 @@ export interface PlasticMoments {
 const above = new Float64Array(6);
 
 /** Area (and \int y) above the cut; `box` holds each part's yMin, yMax at offsets 2 and 3 (stride 4), `moments` its own moments. */
-function areaAbove(edges: Float64Array, p: PreparedSection, box: Float64Array, moments: Float64Array, cut: number): number {
+function areaAbove(edges: Float64Array, p: PreparedSection, box: Float64Array, moments: Float64Array, cut: number, weight: Float64Array): number {
   above.fill(0);
   for (let i = 0; i < p.count; i++) {
-    const s = p.sign[i]!;
+    const s = weight[i]!;
     if (cut >= box[i * 4 + 3]!) continue;
     if (cut <= box[i * 4 + 2]!) {
       above[M_AREA]! += s * moments[i * 6 + M_AREA]!;
@@ -63,22 +63,26 @@ function areaAbove(edges: Float64Array, p: PreparedSection, box: Float64Array, m
   return above[M_AREA]!;
 }
 
-function widthAt(edges: Float64Array, p: PreparedSection, box: Float64Array, cut: number): number {
+function widthAt(edges: Float64Array, p: PreparedSection, box: Float64Array, cut: number, weight: Float64Array): number {
   let b = 0;
   for (let i = 0; i < p.count; i++) {
     if (cut < box[i * 4 + 2]! || cut > box[i * 4 + 3]!) continue;
-    b += p.sign[i]! * chordAt(edges, p.edgeStart[i]!, p.edgeStart[i + 1]!, cut, true);
+    b += weight[i]! * chordAt(edges, p.edgeStart[i]!, p.edgeStart[i + 1]!, cut, true);
   }
   return b;
 }
 
-/** The plastic neutral axis (local y) and plastic modulus for bending about the local horizontal axis. */
-function plasticAboutHorizontal(edges: Float64Array, p: PreparedSection, box: Float64Array, moments: Float64Array, yMin: number, yMax: number): { axis: number; modulus: number } {
+/**
+ * The plastic neutral axis (local y) and plastic modulus for bending about the local horizontal
+ * axis; each part's area counts with its `weight` (its sign for one material, sign times yield
+ * strength for several, when the "modulus" is the plastic moment itself).
+ */
+function plasticAboutHorizontal(edges: Float64Array, p: PreparedSection, box: Float64Array, moments: Float64Array, yMin: number, yMax: number, weight: Float64Array): { axis: number; modulus: number } {
   let area = 0;
   let firstMoment = 0;
   for (let i = 0; i < p.count; i++) {
-    area += p.sign[i]! * moments[i * 6 + M_AREA]!;
-    firstMoment += p.sign[i]! * moments[i * 6 + M_Y]!;
+    area += weight[i]! * moments[i * 6 + M_AREA]!;
+    firstMoment += weight[i]! * moments[i * 6 + M_Y]!;
   }
   const half = area / 2;
   let lo = yMin;
@@ -87,16 +91,16 @@ function plasticAboutHorizontal(edges: Float64Array, p: PreparedSection, box: Fl
   const span = yMax - yMin;
   // Newton on A_above(c) = A / 2 (its derivative is minus the width), kept inside a bracket
   for (let iter = 0; iter < 200; iter++) {
-    const f = areaAbove(edges, p, box, moments, c) - half;
+    const f = areaAbove(edges, p, box, moments, c, weight) - half;
     if (f > 0) lo = c;
     else hi = c;
     if (Math.abs(f) <= 1e-15 * area || hi - lo <= 1e-15 * span) break;
-    const b = widthAt(edges, p, box, c);
+    const b = widthAt(edges, p, box, c, weight);
     let next = b > 0 ? c + f / b : Number.NaN;
     if (!(next > lo && next < hi)) next = (lo + hi) / 2;
     c = next;
   }
-  const aAbove = areaAbove(edges, p, box, moments, c);
+  const aAbove = areaAbove(edges, p, box, moments, c, weight);
   const myAbove = above[M_Y]!;
   const myBelow = firstMoment - myAbove;
   const aBelow = area - aAbove;
@@ -125,6 +129,30 @@ function quarterTurn(edges: Float64Array, out: Float64Array): Float64Array {
     }
   }
   return out;
+}
+
+/**
+ * @internal Plastic neutral axes (local coordinates) and the weighted plastic moduli about the
+ * horizontal and vertical directions of a prepared section, each part weighted by `weight`.
+ */
+export function plasticAxes(p: PreparedSection, weight: Float64Array): { aboutZ: { axis: number; modulus: number }; aboutY: { axis: number; modulus: number } } {
+  const b = p.box;
+  const aboutZ = plasticAboutHorizontal(p.edges, p, p.partBox, p.partMoments, b[2]!, b[3]!, weight);
+  // a quarter turn (z, y) -> (-y, z) makes vertical cuts horizontal: boxes and moments follow
+  // one allocation for all three (typed arrays over 64 bytes cost microseconds each)
+  const turned = new Float64Array(p.count * 10 + p.edges.length);
+  const turnedBox = turned.subarray(0, p.count * 4);
+  const turnedMoments = turned.subarray(p.count * 4, p.count * 10);
+  for (let i = 0; i < p.count; i++) {
+    turnedBox[i * 4] = -p.partBox[i * 4 + 3]!;
+    turnedBox[i * 4 + 1] = -p.partBox[i * 4 + 2]!;
+    turnedBox[i * 4 + 2] = p.partBox[i * 4]!;
+    turnedBox[i * 4 + 3] = p.partBox[i * 4 + 1]!;
+    turnedMoments[i * 6 + M_AREA] = p.partMoments[i * 6 + M_AREA]!;
+    turnedMoments[i * 6 + M_Y] = p.partMoments[i * 6 + M_Z]!;
+  }
+  const aboutY = plasticAboutHorizontal(quarterTurn(p.edges, turned.subarray(p.count * 10)), p, turnedBox, turnedMoments, b[0]!, b[1]!, weight);
+  return { aboutZ, aboutY };
 }
 
 /**
@@ -163,22 +191,7 @@ export function plasticProperties(section: Section): PlasticProperties {
     }
   }
   found.throwIfAny();
-  const b = p.box;
-  const aboutZ = plasticAboutHorizontal(p.edges, p, p.partBox, p.partMoments, b[2]!, b[3]!);
-  // a quarter turn (z, y) -> (-y, z) makes vertical cuts horizontal: boxes and moments follow
-  // one allocation for all three (typed arrays over 64 bytes cost microseconds each)
-  const turned = new Float64Array(p.count * 10 + p.edges.length);
-  const turnedBox = turned.subarray(0, p.count * 4);
-  const turnedMoments = turned.subarray(p.count * 4, p.count * 10);
-  for (let i = 0; i < p.count; i++) {
-    turnedBox[i * 4] = -p.partBox[i * 4 + 3]!;
-    turnedBox[i * 4 + 1] = -p.partBox[i * 4 + 2]!;
-    turnedBox[i * 4 + 2] = p.partBox[i * 4]!;
-    turnedBox[i * 4 + 3] = p.partBox[i * 4 + 1]!;
-    turnedMoments[i * 6 + M_AREA] = p.partMoments[i * 6 + M_AREA]!;
-    turnedMoments[i * 6 + M_Y] = p.partMoments[i * 6 + M_Z]!;
-  }
-  const aboutY = plasticAboutHorizontal(quarterTurn(p.edges, turned.subarray(p.count * 10)), p, turnedBox, turnedMoments, b[0]!, b[1]!);
+  const { aboutZ, aboutY } = plasticAxes(p, p.sign);
   const elastic = sectionProperties(section);
   const zz = aboutZ.modulus;
   const zy = aboutY.modulus;
