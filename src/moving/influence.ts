@@ -21,11 +21,33 @@ function unloaded(beam: BeamInput): BeamInput {
   return beam.hinges === undefined ? out : { ...out, hinges: beam.hinges };
 }
 
-/** The deflection of the member under one case, at the lowest degree that holds it; the solve's warnings go to `warnings`. */
-function deflectionUnder(beam: BeamInput, supports: readonly Support[], loads: readonly Load[], warnings?: BeamWarning[]): PiecewisePolynomial {
+/** The deflection of the member under one case, at the lowest degree that holds it (straight, degree 1, on a determinate member); the solve's warnings go to `warnings`. */
+function deflectionUnder(beam: BeamInput, supports: readonly Support[], loads: readonly Load[], warnings: BeamWarning[], straight: boolean): PiecewisePolynomial {
   const s = solveBeam({ ...beam, supports, loads });
-  if (warnings !== undefined) for (const w of s.warnings) if (!warnings.some((k) => k.code === w.code)) warnings.push(w);
-  return trimDegree(s.deflection);
+  for (const w of s.warnings) if (!warnings.some((k) => k.code === w.code)) warnings.push(w);
+  return straight ? toStraight(s.deflection) : trimDegree(s.deflection);
+}
+
+/** A rigid-body displacement of a determinate member is straight on every piece: the curvature a solve leaves is rounding. */
+function toStraight(pp: PiecewisePolynomial): PiecewisePolynomial {
+  const d = pp.degree;
+  const pieces = pp.breaks.length - 1;
+  const out = new Float64Array(pieces * 2);
+  for (let p = 0; p < pieces; p++) {
+    out[2 * p] = pp.coefficients[p * (d + 1)] as number;
+    out[2 * p + 1] = d >= 1 ? (pp.coefficients[p * (d + 1) + 1] as number) : 0;
+  }
+  return makePiecewise(pp.breaks.slice(), out, 1);
+}
+
+/** True when the member is statically determinate: rigid supports only, with as many restraints as two plus one per hinge (it is stable: the solve said so). */
+function isDeterminate(beam: BeamInput): boolean {
+  let restraints = 0;
+  for (const s of beam.supports) {
+    if (s.kind === "spring") return false;
+    restraints += (restrainsDeflection(s) ? 1 : 0) + (restrainsRotation(s) ? 1 : 0);
+  }
+  return restraints === 2 + (beam.hinges ?? []).length;
 }
 
 function scaled(pp: PiecewisePolynomial, factor: number): PiecewisePolynomial {
@@ -57,22 +79,24 @@ function scaled(pp: PiecewisePolynomial, factor: number): PiecewisePolynomial {
  */
 export function memberInfluence(beam: BeamInput): MemberInfluence {
   const plain = unloaded(beam);
-  const warnings: BeamWarning[] = [...solveBeam(plain).warnings]; // every problem of the member itself, reported once
+  const base = solveBeam(plain); // every problem of the member itself, reported once
+  const warnings: BeamWarning[] = [...base.warnings];
   const supports = plain.supports;
+  const determinate = isDeterminate(plain);
   const reactions: ReactionInfluence[] = supports.map((s, j) => {
     const entry: { support: number; at: number; force?: PiecewisePolynomial; moment?: PiecewisePolynomial } = { support: j, at: s.at };
     const with_ = (change: Partial<Support>): Support[] => supports.map((t, i) => (i === j ? { ...t, ...change } : t));
     if (restrainsDeflection(s)) {
       entry.force =
         s.kind === "spring"
-          ? scaled(deflectionUnder(plain, supports, [{ kind: "point", at: s.at, value: 1 }], warnings), -(s.stiffness as number))
-          : scaled(deflectionUnder(plain, with_({ settlement: 1 }), [], warnings), -1);
+          ? scaled(deflectionUnder(plain, supports, [{ kind: "point", at: s.at, value: 1 }], warnings, false), -(s.stiffness as number))
+          : scaled(deflectionUnder(plain, with_({ settlement: 1 }), [], warnings, determinate), -1);
     }
     if (restrainsRotation(s)) {
       entry.moment =
         s.kind === "spring"
-          ? scaled(deflectionUnder(plain, supports, [{ kind: "couple", at: s.at, value: 1 }], warnings), s.rotationalStiffness as number)
-          : deflectionUnder(plain, with_({ rotation: 1 }), [], warnings);
+          ? scaled(deflectionUnder(plain, supports, [{ kind: "couple", at: s.at, value: 1 }], warnings, false), s.rotationalStiffness as number)
+          : deflectionUnder(plain, with_({ rotation: 1 }), [], warnings, determinate);
     }
     return Object.freeze(entry);
   });
@@ -85,6 +109,8 @@ export function memberInfluence(beam: BeamInput): MemberInfluence {
     supports: Object.freeze(supports.slice()),
     reactions: Object.freeze(reactions),
     nodes: Float64Array.from([...nodes].sort((a, b) => a - b)),
+    spans: base.spans,
+    determinate,
     warnings: Object.freeze(warnings),
   });
 }

@@ -2,13 +2,17 @@ import { makePiecewise, type PiecewisePolynomial } from "../math/piecewise.js";
 
 /**
  * One term of a {@link shiftedSum}: `weight * pp(s + shift)`, with `pp` zero before its domain and,
- * after it, zero or (with `hold`) its last value (the running integral of a line that ends).
+ * after it, zero or (with `hold`) its last value (the running integral of a line that ends); with
+ * `about`, times `(s - about)`; with `from` / `to`, zero outside `[from, to]`.
  */
 export interface ShiftedTerm {
   readonly pp: PiecewisePolynomial;
   readonly shift: number;
   readonly weight: number;
   readonly hold?: boolean;
+  readonly about?: number;
+  readonly from?: number;
+  readonly to?: number;
 }
 
 /** Replaces `c[o..o+d]`, the coefficients of p(t), with those of p(t + h). */
@@ -49,11 +53,13 @@ export function shiftedSum(terms: readonly ShiftedTerm[], lo: number, hi: number
   const xs: number[] = [lo, hi];
   let degree = 0;
   for (const t of terms) {
-    degree = Math.max(degree, t.pp.degree);
+    degree = Math.max(degree, t.pp.degree + (t.about === undefined ? 0 : 1));
     for (const b of t.pp.breaks) {
       const s = b - t.shift;
       if (s > lo && s < hi) xs.push(s);
     }
+    if (t.from !== undefined && t.from > lo && t.from < hi) xs.push(t.from);
+    if (t.to !== undefined && t.to > lo && t.to < hi) xs.push(t.to);
   }
   xs.sort((a, b) => a - b);
   const gap = 1e-14 * (Math.abs(lo) + Math.abs(hi) + (hi - lo));
@@ -66,27 +72,36 @@ export function shiftedSum(terms: readonly ShiftedTerm[], lo: number, hi: number
   const n = degree + 1;
   const pieces = breaks.length - 1;
   const out = new Float64Array(pieces * n);
-  const tmp = new Float64Array(n);
+  const tmp = new Float64Array(n + 1);
   for (let p = 0; p < pieces; p++) {
     const s0 = breaks[p] as number;
     const mid = 0.5 * (s0 + (breaks[p + 1] as number));
     const o = p * n;
     for (const t of terms) {
+      if ((t.from !== undefined && mid < t.from) || (t.to !== undefined && mid > t.to)) continue;
       const b = t.pp.breaks;
       const x = mid + t.shift;
       const first = b[0] as number;
       const last = b[b.length - 1] as number;
       if (x < first) continue;
-      if (x > last) {
-        if (t.hold === true) out[o] = (out[o] as number) + t.weight * pieceValue(t.pp, b.length - 2, last);
-        continue;
-      }
-      const i = pieceAt(b, x);
-      const d = t.pp.degree;
+      let d = t.pp.degree;
       tmp.fill(0);
-      for (let k = 0; k <= d; k++) tmp[k] = t.pp.coefficients[i * (d + 1) + k] as number;
-      taylorShift(tmp, 0, d, s0 + t.shift - (b[i] as number));
-      for (let k = 0; k <= d; k++) out[o + k] = (out[o + k] as number) + t.weight * (tmp[k] as number);
+      if (x > last) {
+        if (t.hold !== true) continue;
+        tmp[0] = pieceValue(t.pp, b.length - 2, last);
+        d = 0;
+      } else {
+        const i = pieceAt(b, x);
+        for (let k = 0; k <= d; k++) tmp[k] = t.pp.coefficients[i * (d + 1) + k] as number;
+        taylorShift(tmp, 0, d, s0 + t.shift - (b[i] as number));
+      }
+      if (t.about === undefined) {
+        for (let k = 0; k <= d; k++) out[o + k] = (out[o + k] as number) + t.weight * (tmp[k] as number);
+      } else {
+        // times (s - about) = (u + s0 - about), u the local coordinate
+        const h = s0 - t.about;
+        for (let k = 0; k <= d + 1; k++) out[o + k] = (out[o + k] as number) + t.weight * (h * (k <= d ? (tmp[k] as number) : 0) + (k > 0 ? (tmp[k - 1] as number) : 0));
+      }
     }
   }
   return makePiecewise(Float64Array.from(breaks), out, degree);

@@ -1,4 +1,4 @@
-import type { BeamInput, BeamWarning } from "../beam/index.js";
+import type { BeamInput, BeamSpan, BeamWarning } from "../beam/index.js";
 import type { PiecewisePolynomial } from "../math/index.js";
 import type { Support } from "../supports/index.js";
 
@@ -91,6 +91,10 @@ export interface MemberInfluence {
   readonly reactions: readonly ReactionInfluence[];
   /** Fixed breakpoints of every influence line: the ends, supports, hinges and changes of E I, sorted (length units). */
   readonly nodes: Float64Array;
+  /** True when the member is statically determinate (rigid supports, as many restraints as two plus one per hinge): its influence lines of reactions, shear and moment are straight between breakpoints. */
+  readonly determinate: boolean;
+  /** The spans and cantilevers between supports that hold deflection, left to right (as `BeamSolution.spans`). */
+  readonly spans: readonly BeamSpan[];
   /** What the solver noticed in the reciprocal solves (for example `ill-conditioned` or an imbalance): the lines may be less accurate. Empty when all is well. */
   readonly warnings: readonly BeamWarning[];
 }
