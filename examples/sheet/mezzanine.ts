@@ -20,7 +20,15 @@ export interface ExampleMember {
   readonly loads: readonly (readonly (number | string | null)[])[];
   /** Rows of name | value. */
   readonly limits: readonly (readonly [string, number | string])[];
+  /** When its loads name the cases of {@link CASES}: the envelope over the ASCE 7-16 strength combinations is asked for too. */
+  readonly enveloped?: boolean;
 }
+
+/** The load cases the enveloped members' loads name: rows of name | category | reversible | patterned. */
+export const CASES: readonly (readonly [string, string, boolean, boolean])[] = [
+  ["D", "dead", false, false],
+  ["L", "live", false, true],
+];
 
 const beam = [["depth", 310], ["flangeWidth", 165], ["flangeThickness", 9.7], ["webThickness", 5.8]] as const;
 const joist = [["depth", 200], ["flangeWidth", 75], ["flangeThickness", 11], ["webThickness", 8.5]] as const;
@@ -31,7 +39,7 @@ const pinRoller = (l: number): ExampleMember["supports"] => [[0, "pin"], [l, "ro
 export const MEMBERS: readonly ExampleMember[] = [
   { mark: "PB1", description: "Primary beam, grid A", length: 6, E: "200 GPa", section: { shape: "i-section", dimensions: beam }, supports: pinRoller(6), loads: [["point", 2, null, 24], ["point", 4, null, 24], ["distributed", null, null, 1.2]], limits: steel },
   { mark: "PB2", description: "Primary beam, grid B", length: 6, E: "200 GPa", section: { shape: "i-section", dimensions: beam }, supports: pinRoller(6), loads: [["point", 1.5, null, 30], ["point", 4.5, null, 30], ["distributed", null, null, 1.2]], limits: steel },
-  { mark: "PB3", description: "Primary beam, grid C, over a middle post", length: 8, E: "200 GPa", section: { shape: "i-section", dimensions: [["depth", 360], ["flangeWidth", 170], ["flangeThickness", 12.7], ["webThickness", 8]] }, supports: [[0, "pin"], [4, "roller"], [8, "roller"]], loads: [["distributed", null, null, 9]], limits: steel },
+  { mark: "PB3", description: "Primary beam, grid C, over a middle post", length: 8, E: "200 GPa", section: { shape: "i-section", dimensions: [["depth", 360], ["flangeWidth", 170], ["flangeThickness", 12.7], ["webThickness", 8]] }, supports: [[0, "pin"], [4, "roller"], [8, "roller"]], loads: [["distributed", null, null, 3, null, "D"], ["distributed", null, null, 6, null, "L"]], limits: steel, enveloped: true },
   { mark: "J1", description: "Joist, bay 1", length: 4, E: "200 GPa", section: { shape: "channel", dimensions: joist }, supports: pinRoller(4), loads: [["distributed", null, null, 4.5]], limits: steel },
   { mark: "J2", description: "Joist, bay 2", length: 4, E: "200 GPa", section: { shape: "channel", dimensions: joist }, supports: pinRoller(4), loads: [["distributed", null, null, 5.2]], limits: steel },
   { mark: "J3", description: "Joist, bay 3, pallet racking strip", length: 4, E: "200 GPa", section: { shape: "channel", dimensions: joist }, supports: pinRoller(4), loads: [["distributed", null, null, 4.5], ["distributed", 1, 3, 6]], limits: steel },
@@ -51,19 +59,27 @@ export const FIRST_ROW = 3;
 /** Where each range of a member's block sits: columns, and its result cells. */
 export const COLUMNS = {
   mark: "A", description: "B", length: "C", E: "D", shape: "E", dims: ["F", "H"], supports: ["I", "K"], loads: ["L", "Q"], limits: ["R", "S"],
-  I: "T", reaction: "U", moment: "V", maxMoment: "W", deflection: "X", utilisation: "Y",
+  I: "T", reaction: "U", moment: "V", maxMoment: "W", deflection: "X", utilisation: "Y", envelope: "Z",
 } as const;
+
+/** The first row (1-based) of the cases table, under the member blocks, the caution and a heading. */
+export const CASES_ROW = FIRST_ROW + MEMBERS.length * BLOCK_ROWS + 3;
+/** The cases table's range. */
+const CASES_RANGE = `$A$${CASES_ROW}:$D$${CASES_ROW + 1}`;
 
 const range = ([a, b]: readonly [string, string], r: number): string => `${a}${r}:${b}${r + BLOCK_ROWS - 1}`;
 
-/** The formulas of one member's result cells, by column, for the block starting at row `r`. */
+/** The formulas of one member's result cells, by column (or by cell, for the envelope's two), for the block starting at row `r`. */
 export function memberFormulas(m: ExampleMember, r: number): Readonly<Record<string, string>> {
   const c = COLUMNS;
   const stiffness = "segments" in m.section ? range(c.dims, r) : `${c.I}${r}`;
   const member = `${c.length}${r}, ${c.E}${r}, ${stiffness}, ${range(c.supports, r)}, ${range(c.loads, r)}`;
   const shape = "segments" in m.section ? "" : `${c.shape}${r}`;
   const dims = "segments" in m.section ? "" : range(["F", "G"], r);
+  const envelope = `FLEXURA.ENVELOPEPEAKS(${CASES_RANGE}, "asce7-16-strength", , ${member})`;
   return {
+    // The envelope's peak hogging moment (row 3: moment; column 5: min) and, in the row below, its governing combination.
+    ...(m.enveloped === true ? { [`${c.envelope}${r}`]: `INDEX(${envelope}, 3, 5)`, [`${c.envelope}${r + 1}`]: `INDEX(${envelope}, 3, 7)` } : {}),
     ...("segments" in m.section ? {} : { [c.I]: `FLEXURA.SECTIONPROPERTY("secondMomentZ", ${c.shape}${r}, ${dims})` }),
     [c.reaction]: `INDEX(FLEXURA.REACTIONS(${member}), 2, 3)`,
     [c.moment]: `FLEXURA.MOMENT(${c.length}${r} / 2, ${member})`,
@@ -85,6 +101,7 @@ export function mezzanineWorkbook(): ExcelJS.Workbook {
     A: "mark", B: "member", C: "span (m)", D: "E", E: "shape", F: "dimension / start", G: "value (mm) / end", H: "I (segments)",
     I: "support at (m)", J: "kind", K: "value", L: "load kind", M: "at / from (m)", N: "to (m)", O: "value", P: "end value", Q: "case",
     R: "limit", S: "value", T: "I (mm^4)", U: "left reaction (kN)", V: "moment at midspan (kN*m)", W: "peak sagging moment (kN*m)", X: "peak deflection (mm, up +)", Y: "utilisation",
+    Z: "envelope, ASCE 7-16 strength: peak hogging moment (kN*m), governing combination",
   };
   for (const [col, text] of Object.entries(heads)) ws.getCell(`${col}2`).value = text;
   for (const [i, m] of MEMBERS.entries()) {
@@ -111,9 +128,11 @@ export function mezzanineWorkbook(): ExcelJS.Workbook {
       set("R", r + j, name);
       set("S", r + j, value);
     });
-    for (const [col, formula] of Object.entries(memberFormulas(m, r))) ws.getCell(`${col}${r}`).value = { formula };
+    for (const [col, formula] of Object.entries(memberFormulas(m, r))) ws.getCell(/\d/.test(col) ? col : `${col}${r}`).value = { formula };
   }
   ws.getCell(`A${FIRST_ROW + MEMBERS.length * BLOCK_ROWS + 1}`).value =
     "Caution: elastic first-order analysis; you are responsible for the loads, code compliance and review by a licensed engineer; local codes govern.";
+  ws.getCell(`A${CASES_ROW - 1}`).value = "Load cases (name | category | reversible | patterned) of the members whose loads name a case";
+  CASES.forEach((row, j) => row.forEach((v, k) => (ws.getCell(`${"ABCD"[k]!}${CASES_ROW + j}`).value = v)));
   return wb;
 }

@@ -1,5 +1,5 @@
 import { evaluateDiagram, type ModelAnalysis } from "../model/index.js";
-import { cellQuantity, isBlank, isSheetError, sheetError, shown, type CellValue, type SheetValue } from "./cells.js";
+import { cellQuantity, isBlank, isSheetError, sheetError, shown, type CellValue, type SheetError, type SheetValue } from "./cells.js";
 import { memberModelJson } from "./member.js";
 import { analyseCached, analysisJson, cachedByCells } from "./solve.js";
 
@@ -10,14 +10,15 @@ import { analyseCached, analysisJson, cachedByCells } from "./solve.js";
  */
 export type SheetMemberArgs = readonly [length: unknown, E: unknown, I: unknown, supports: unknown, loads: unknown, units?: unknown];
 
-function analysed(args: SheetMemberArgs): ModelAnalysis | SheetValue {
+/** The member of a function's cells, analysed (once while it stays in the cache), or the error naming what is wrong. */
+export function analysed(args: SheetMemberArgs): ModelAnalysis | SheetError {
   return cachedByCells("member", args, () => {
     const json = memberModelJson(args[0], args[1], args[2], args[3], args[4], args[5]);
     return isSheetError(json) ? json : analyseCached(json);
   });
 }
 
-const isAnalysis = (v: ModelAnalysis | SheetValue): v is ModelAnalysis => typeof v === "object" && v !== null && !Array.isArray(v) && !isSheetError(v);
+const isAnalysis = (v: ModelAnalysis | SheetError): v is ModelAnalysis => !isSheetError(v);
 
 /**
  * The reactions of a member as a table with a header row: support number (from 1), position, force (up

@@ -6,3 +6,5 @@ export { type SheetMemberArgs, MAX_STATIONS, sheetReactions, sheetShear, sheetMo
 export { sheetFunctions, callSheetFunction, type SheetFunction, type SheetParameter } from "./registry.js";
 export { sectionJson, sheetSection, sheetSectionProperty, sheetBendingStress, sheetShearStress } from "./section.js";
 export { limitsJson, sheetChecks, sheetUtilisation } from "./checks.js";
+export { casesFromCells, combinationInput, type SheetCombinationInput } from "./combination-cells.js";
+export { sheetCombinations, sheetEnvelope, sheetGoverning, sheetEnvelopePeaks, sheetReactionEnvelope } from "./envelopes.js";

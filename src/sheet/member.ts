@@ -100,14 +100,18 @@ const COLUMN_WORDS: Readonly<Record<string, Readonly<Record<string, string>>>> =
   supports: { at: "position", type: "kind", stiffness: "value (spring stiffness)", settlement: "value (settlement)" },
   loads: { type: "kind", at: "position", from: "position", to: "end position", value: "value", start: "value", end: "end value", case: "case" },
   segments: { from: "start", to: "end", I: "I", E: "E" },
+  cases: { name: "name", category: "category", reversible: "reversible", patterned: "patterned" },
 };
 
 /** The argument a model path's range belongs to. */
-const RANGE_ARGUMENT: Readonly<Record<string, string>> = { supports: "supports", loads: "loads", segments: "I" };
+const RANGE_ARGUMENT: Readonly<Record<string, string>> = { supports: "supports", loads: "loads", segments: "I", cases: "cases" };
 
 /** A model path (`["loads", 2, "at"]`) in the sheet's words: `loads row 3, position`. */
 export function sheetPlace(path: readonly (string | number)[]): string {
   const [first, index, field] = path;
+  // The combination functions' member is the solver's input (`beam`), whose loads and supports are the rows'.
+  if (first === "beam" && path.length > 1) return sheetPlace(path.slice(1));
+  if (first === "options") return path.length === 1 ? "options" : `options, ${path.slice(1).map(String).join(".")}`;
   if (typeof first === "string" && Object.hasOwn(RANGE_ARGUMENT, first) && typeof index === "number") {
     const words = COLUMN_WORDS[first]!;
     const column = typeof field === "string" && Object.hasOwn(words, field) ? `, ${words[field]}` : "";

@@ -1,6 +1,7 @@
 import { sheetError, type SheetValue } from "./cells.js";
 import { sheetChecks, sheetUtilisation } from "./checks.js";
 import { sheetDeflection, sheetModelResult, sheetMoment, sheetPeaks, sheetReactions, sheetShear, sheetSlope, sheetStations } from "./functions.js";
+import { sheetCombinations, sheetEnvelope, sheetEnvelopePeaks, sheetGoverning, sheetReactionEnvelope } from "./envelopes.js";
 import { sheetBendingStress, sheetSection, sheetSectionProperty, sheetShearStress } from "./section.js";
 
 /** One argument of a spreadsheet function: its name, whether it takes a range, and what goes in it. */
@@ -48,6 +49,13 @@ const SECTION: readonly SheetParameter[] = [
 const UNITS = MEMBER[5]!;
 const LIMITS = range("limits", "Rows of name | value: deflection | span/360 (or a length), bendingStress | 165 MPa, shearStress | 95 MPa.");
 
+const CASES = range("cases", "Rows of name | category (dead, live, roof-live, snow, rain, wind, seismic, crane, user) | reversible | patterned (TRUE or FALSE).");
+const COMBINATIONS = range("combinations", "A preset: asce7-16-strength, asce7-16-allowable-stress, en1990-strength, en1990-serviceability; or factors: a header row of case names, then name | factor per case.");
+const OPTIONS = range("options", "Rows of name | value: imposedCategory | B, loadsNotActing | FALSE, expression | 6.10a-b, map.<case> | dead, settlementCase, cap; may be blank.");
+const COMBINED: readonly SheetParameter[] = [CASES, COMBINATIONS, OPTIONS, ...MEMBER];
+const QUANTITY = cell("quantity", "shear, moment, slope or deflection.");
+const BOUND = cell("bound", "max (upper envelope) or min (lower envelope).");
+
 const entry = (name: string, parameters: readonly SheetParameter[], required: number, returns: "table" | "value", summary: string, call: (...args: never[]) => SheetValue): SheetFunction =>
   Object.freeze({ name, parameters: Object.freeze([...parameters]), required, returns, summary, call: guarded(name, parameters, required, call as (...args: unknown[]) => SheetValue) });
 
@@ -84,6 +92,11 @@ export const sheetFunctions: readonly SheetFunction[] = Object.freeze([
   entry("FLEXURA.SHEARSTRESS", [cell("shear", "Shear force (force unit)."), cell("y", "Height of the cut above the centroid, negative below (section-length unit)."), ...SECTION, UNITS], 4, "value", "Shear stress at a horizontal cut, V Q / (I b), with the sign of V.", sheetShearStress),
   entry("FLEXURA.CHECKS", [LIMITS, ...SECTION, ...MEMBER], 8, "table", "The member's checks against the limits: demand, capacity, utilisation, pass, where.", sheetChecks),
   entry("FLEXURA.UTILISATION", [LIMITS, ...SECTION, ...MEMBER], 8, "value", "The governing utilisation of the member's checks against the limits (at most 1 passes).", sheetUtilisation),
+  entry("FLEXURA.COMBINATIONS", [CASES, COMBINATIONS, OPTIONS], 2, "table", "The combinations as applied: name, purpose, clause, and the factor on each case.", sheetCombinations),
+  entry("FLEXURA.ENVELOPE", [QUANTITY, BOUND, X, ...COMBINED], 11, "value", "Envelope of shear, moment, slope or deflection at x over the combinations and span patterns.", sheetEnvelope),
+  entry("FLEXURA.GOVERNING", [QUANTITY, BOUND, X, ...COMBINED], 11, "value", "The combination (and span pattern) that governs the envelope at x.", sheetGoverning),
+  entry("FLEXURA.ENVELOPEPEAKS", COMBINED, 8, "table", "Peaks of the envelopes of shear, moment, slope and deflection, with where and the governing combination.", sheetEnvelopePeaks),
+  entry("FLEXURA.REACTIONENVELOPE", COMBINED, 8, "table", "Each support's largest and smallest reaction force and moment over the combinations, with the governing ones.", sheetReactionEnvelope),
   entry("FLEXURA.MODEL", [cell("model", "A model file's JSON text (docs/model-format.md)."), cell("path", "A result path such as moment.max.value or reactions[0].force.")], 2, "value", "Any result of a model given as JSON text, by a path such as moment.max.value.", sheetModelResult),
 ]);
 

@@ -13,12 +13,20 @@ import { sheetPlace, type ModelJson } from "./member.js";
 export const SHEET_CACHE_SIZE = 512;
 
 const cache = new Map<string, ModelAnalysis | SheetError>();
-const byCells = new Map<string, ModelAnalysis | SheetError>();
+const byCells = new Map<string, unknown>();
 let solves = 0;
 
-/** Number of members solved since the module loaded (cache misses); for tests and benchmarks. */
+/**
+ * Number of solves since the module loaded (cache misses): each member analysed, and each member solved case
+ * by case for a combination function; for tests and benchmarks.
+ */
 export function sheetSolveCount(): number {
   return solves;
+}
+
+/** Counts one solve (a member solved case by case for the combination functions). */
+export function countSolve(): void {
+  solves += 1;
 }
 
 /** Empties the cache of analysed members. */
@@ -28,7 +36,7 @@ export function clearSheetCache(): void {
 }
 
 /** Looks a key up in a least-recently-used map, marking it used. */
-function lookUp(map: Map<string, ModelAnalysis | SheetError>, key: string): ModelAnalysis | SheetError | undefined {
+function lookUp<T>(map: Map<string, T>, key: string): T | undefined {
   const hit = map.get(key);
   if (hit !== undefined) {
     map.delete(key);
@@ -38,7 +46,7 @@ function lookUp(map: Map<string, ModelAnalysis | SheetError>, key: string): Mode
 }
 
 /** Keeps a value in a least-recently-used map of at most {@link SHEET_CACHE_SIZE} entries. */
-function keep(map: Map<string, ModelAnalysis | SheetError>, key: string, value: ModelAnalysis | SheetError): void {
+function keep<T>(map: Map<string, T>, key: string, value: T): void {
   map.set(key, value);
   if (map.size > SHEET_CACHE_SIZE) map.delete(map.keys().next().value as string);
 }
@@ -80,22 +88,22 @@ export function cellsKey(value: unknown): string | undefined {
  * looked up first, so a warm recalculation neither re-reads the ranges into a model nor serialises it. `kind`
  * names what the cells are read as (a member, a section, a checked member), `read` builds the result on a miss.
  */
-export function cachedByCells(kind: string, cells: readonly unknown[], read: () => ModelAnalysis | SheetError): ModelAnalysis | SheetError {
+export function cachedByCells<T>(kind: string, cells: readonly unknown[], read: () => T): T {
   const k = cellsKey(cells);
   if (k === undefined) return read();
   const key = `${kind}:${k}`;
-  const hit = lookUp(byCells, key);
+  const hit = lookUp(byCells, key) as T | undefined;
   if (hit !== undefined) return hit;
   const result = read();
   keep(byCells, key, result);
   return result;
 }
 
-/** The library's error as the cell shows it: every issue, in the sheet's words. */
-export function cellMessage(error: unknown): SheetError {
+/** The library's error as the cell shows it: every issue, in the sheet's words (`place` says where a path is). */
+export function cellMessage(error: unknown, place: (path: readonly (string | number)[]) => string = sheetPlace): SheetError {
   if (!isFlexuraError(error)) return sheetError("sheet-internal-error", `flexura failed unexpectedly: ${String(error)}. Please report it with the sheet.`);
   const first = error.issues[0];
-  const text = error.issues.map((i) => `${sheetPlace(i.path)}: ${i.message}`).join(" ");
+  const text = error.issues.map((i) => `${place(i.path)}: ${i.message}`).join(" ");
   return sheetError(first?.code ?? "sheet-internal-error", text);
 }
 

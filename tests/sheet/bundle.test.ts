@@ -42,7 +42,15 @@ function call(context: Context, name: string, args: unknown[]): unknown {
 const member = [6, "200 GPa", "80e6 mm^4", [[0, "pin", ""], [6, "roller", ""], ["", "", ""]], [["distributed", "", "", 12, "", ""], ["point", 2, "", 20, "", ""]], ""];
 const rect = [["width", 100], ["depth", 200]];
 const limits = [["deflection", "span/360"], ["bendingStress", "165 MPa"]];
+// Two spans, dead and live load, the live load patterned span by span.
+const cases = [["D", "dead", "", ""], ["L", "live", "", true]];
+const combined = [cases, "asce7-16-strength", "", 11, "200 GPa", "80e6 mm^4", [[0, "pin", ""], [5, "roller", ""], [11, "roller", ""]], [["distributed", "", "", 2, "", "D"], ["distributed", "", "", 10, "", "L"]], ""];
 const ARGS: Readonly<Record<string, unknown[]>> = {
+  "FLEXURA.COMBINATIONS": [cases, [["combination", "D", "L"], ["", 1.2, 1.6], ["service", 1, 1]], ""],
+  "FLEXURA.ENVELOPE": ["moment", "min", 5, ...combined],
+  "FLEXURA.GOVERNING": ["moment", "max", 2, ...combined],
+  "FLEXURA.ENVELOPEPEAKS": combined,
+  "FLEXURA.REACTIONENVELOPE": combined,
   "FLEXURA.MODEL": [JSON.stringify({ length: 6, E: "200 GPa", I: "80e6 mm^4", supports: [{ at: 0, type: "pin" }, { at: 6, type: "roller" }], loads: [{ type: "distributed", start: 12 }] }), "moment.max.value"],
   "FLEXURA.REACTIONS": member,
   "FLEXURA.PEAKS": member,

@@ -6,8 +6,10 @@ import { resolve } from "node:path";
 import ExcelJS from "exceljs";
 import { beforeAll, describe, expect, test } from "vitest";
 import { analyzeModel, evaluateDiagram, parseModel, type ModelAnalysis } from "../../src/model/index.js";
+import { envelopes, presetCombinations, solveCases, type LoadCase } from "../../src/combine/index.js";
+import { uniformLoad } from "../../src/loads/index.js";
 import { isSheetError, limitsJson, memberModelJson, sectionJson } from "../../src/sheet/index.js";
-import { BLOCK_ROWS, COLUMNS, FIRST_ROW, MEMBERS, mezzanineWorkbook, type ExampleMember } from "../../examples/sheet/mezzanine.js";
+import { BLOCK_ROWS, CASES, COLUMNS, FIRST_ROW, MEMBERS, mezzanineWorkbook, type ExampleMember } from "../../examples/sheet/mezzanine.js";
 import { workbook } from "./engine.js";
 
 type Cell = string | number | boolean | null;
@@ -80,6 +82,21 @@ describe("the example workbook", () => {
     close(at(row("CP1"), COLUMNS.moment), (10 * 49) / 8);
     // LB1, cantilever: the fixed end carries 8 + 2 * 1.5 kN.
     close(at(row("LB1"), COLUMNS.reaction), 11);
+    // PB3's envelope over ASCE 7-16 2.3.1 with its live load placed span by span, against flexura/combine on the
+    // same member in SI (its section's I_z from the sheet's own SECTIONPROPERTY cell, in mm^4).
+    expect(MEMBERS.filter((m) => m.enveloped === true).map((m) => m.mark)).toEqual(["PB3"]);
+    const cases: LoadCase[] = CASES.map(([name, category, reversible, patterned]) => ({ name, category: category as LoadCase["category"], reversible, patterned }));
+    const I = at(row("PB3"), COLUMNS.I) as number;
+    const solved = solveCases(
+      { length: 8, stiffness: 200e9 * I * 1e-12, supports: [{ kind: "pin", at: 0 }, { kind: "roller", at: 4 }, { kind: "roller", at: 8 }], loads: [uniformLoad(0, 8, 3000, "D"), uniformLoad(0, 8, 6000, "L")] },
+      cases,
+    );
+    const e = envelopes(solved, presetCombinations("asce7-16-strength", cases).combinations);
+    close(at(row("PB3"), COLUMNS.envelope), e.moment!.lower.peak.value / 1000);
+    expect(at(row("PB3") + 1, COLUMNS.envelope)).toBe(e.moment!.lower.peak.name);
+    // Two equal spans, both loaded: M at the middle support = -w l^2 / 8 (common practice), w = 1.2 * 3 + 1.6 * 6 (ASCE 7-16 2.3.1 (2)).
+    close(at(row("PB3"), COLUMNS.envelope), (-(1.2 * 3 + 1.6 * 6) * 16) / 8);
+    expect(at(row("PB3") + 1, COLUMNS.envelope)).toBe("1.2D + 1.6L, L on all spans");
     hf.destroy();
   });
 });
