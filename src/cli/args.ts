@@ -5,7 +5,7 @@ import { closestName } from "../errors/index.js";
 export type CliCommand =
   | { readonly kind: "help"; readonly topic: "main" | "analyze" | "check" | "schema" }
   | { readonly kind: "version" }
-  | { readonly kind: "analyze"; readonly file: string; readonly json: boolean; readonly svg: string | undefined }
+  | { readonly kind: "analyze"; readonly file: string; readonly json: boolean; readonly svg: string | undefined; readonly html?: string }
   | { readonly kind: "check"; readonly files: readonly string[]; readonly json: boolean }
   | { readonly kind: "schema" }
   | { readonly kind: "usage-error"; readonly message: string; readonly topic: "main" | "analyze" | "check" | "schema" };
@@ -42,7 +42,7 @@ export function parseCommandLine(argv: readonly string[]): CliCommand {
       options: {
         help: { type: "boolean", short: "h" },
         ...(command === "schema" ? {} : { json: { type: "boolean" } }),
-        ...(command === "analyze" ? { svg: { type: "string" } } : {}),
+        ...(command === "analyze" ? { svg: { type: "string" }, html: { type: "string" } } : {}),
       },
     });
   } catch (e) {
@@ -59,7 +59,9 @@ export function parseCommandLine(argv: readonly string[]): CliCommand {
       if (extra.length > 0) return usage(`analyze takes one model file; got ${positionals.length}. Use check for many.`, command);
       const svg = values.svg;
       if (svg === "") return usage("--svg needs a folder name.", command);
-      return { kind: "analyze", file, json: values.json === true, svg: typeof svg === "string" ? svg : undefined };
+      const html = values.html;
+      if (html === "" || (typeof html === "string" && /[\\/]$/.test(html))) return usage("--html needs a file name, such as sheet.html.", command);
+      return { kind: "analyze", file, json: values.json === true, svg: typeof svg === "string" ? svg : undefined, ...(typeof html === "string" ? { html } : {}) };
     }
     case "check":
       if (positionals.length === 0) return usage("Give at least one model file: flexura check MODEL.json", command);

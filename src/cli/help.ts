@@ -3,7 +3,8 @@ export const HELP = {
   main: `flexura: beams and cross-sections for the engineers who size them
 
 Usage:
-  flexura analyze MODEL.json [--json] [--svg DIR]   print the report of a model
+  flexura analyze MODEL.json [--json] [--svg DIR] [--html FILE]
+                                                     print the report of a model
   flexura check MODEL.json [MODEL.json ...] [--json] exit non-zero when a check fails
   flexura schema                                     print the JSON Schema of model files
   flexura COMMAND --help                             help on one command
@@ -24,7 +25,7 @@ Exit codes:
 flexura performs an elastic, first-order analysis. You are responsible for the loads,
 for code compliance and for review by a licensed engineer. Local codes govern.
 `,
-  analyze: `Usage: flexura analyze MODEL.json [--json] [--svg DIR]
+  analyze: `Usage: flexura analyze MODEL.json [--json] [--svg DIR] [--html FILE]
 
 Analyses one model file (- for standard input) and prints a readable report: inputs with units, reactions, peaks of
 shear, moment, slope and deflection with their locations, section properties, stresses, checks
@@ -35,6 +36,9 @@ Options:
   --svg DIR    also write SVG diagrams into DIR (created if missing): MODEL-member.svg,
                MODEL-shear.svg, MODEL-moment.svg, MODEL-deflection.svg and, with a section,
                MODEL-section.svg
+  --html FILE  also write the printable calculation sheet (one self-contained HTML page:
+               title block with the program version and the input's SHA-256, inputs, one
+               figure, results, checks, method and caution); print it to PDF from a browser
   -h, --help   show this help
 
 Exit codes: 0 analysed (whatever the checks say), 2 usage, 3 file, 4 invalid model, 5 internal.

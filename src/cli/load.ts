@@ -14,7 +14,7 @@ export const MAX_MODEL_FILE_BYTES = 10 * 1024 * 1024;
 
 /** What reading and analysing one model gave: the analysis, or the failure with every problem. */
 export type Loaded =
-  | { readonly ok: true; readonly analysis: ModelAnalysis }
+  | { readonly ok: true; readonly analysis: ModelAnalysis; readonly text: string }
   | { readonly ok: false; readonly failure: CliFailure };
 
 /** How a file is named in messages: its path, or "standard input" for `-`. */
@@ -41,7 +41,7 @@ export function loadAndAnalyze(file: string, io: CliIo): Loaded {
     return { ok: false, failure: contentFailure("json-syntax", `not valid JSON: line ${p.line}, column ${p.column}: ${p.message}`, { line: p.line, column: p.column }) };
   }
   try {
-    return { ok: true, analysis: analyzeModel(parseModel(json.value)) };
+    return { ok: true, analysis: analyzeModel(parseModel(json.value)), text };
   } catch (e) {
     const failure = modelFailure(e);
     if (failure === undefined) throw e;

@@ -1,5 +1,5 @@
 import { analysisToJson, modelSchema, type ModelAnalysis } from "../model/index.js";
-import { formatReportNumber, reportDiagrams, textReport } from "../report/index.js";
+import { calculationSheet, formatReportNumber, reportDiagrams, textReport } from "../report/index.js";
 import { parseCommandLine } from "./args.js";
 import { EXIT, type ExitCode } from "./exit-codes.js";
 import { HELP } from "./help.js";
@@ -53,7 +53,7 @@ function dispatch(argv: readonly string[], io: CliIo): ExitCode {
       io.stdout(`${JSON.stringify(modelSchema, null, 2)}\n`);
       return EXIT.ok;
     case "analyze":
-      return analyzeCommand(command.file, command.json, command.svg, io);
+      return analyzeCommand(command.file, command.json, command.svg, io, command.html);
     case "check": {
       let worst: ExitCode = EXIT.ok;
       for (const file of command.files) {
@@ -105,7 +105,7 @@ function baseName(file: string): string {
   return last.replace(/\.json$/i, "") || "model";
 }
 
-function analyzeCommand(file: string, json: boolean, svg: string | undefined, io: CliIo): ExitCode {
+function analyzeCommand(file: string, json: boolean, svg: string | undefined, io: CliIo, html?: string): ExitCode {
   const loaded = loadAndAnalyze(file, io);
   if (!loaded.ok) return reportFailure(file, loaded.failure, json, io);
   const analysis = loaded.analysis;
@@ -123,7 +123,20 @@ function analyzeCommand(file: string, json: boolean, svg: string | undefined, io
     }
     io.stderr(`flexura: wrote ${written.length} diagrams: ${written.join(", ")}\n`);
   }
-  io.stdout(json ? `${JSON.stringify(analysisToJson(analysis), null, 2)}\n` : textReport(analysis));
+  const input = { name: file === "-" ? "standard input" : (file.split(/[\\/]/).pop() ?? file), bytes: loaded.text };
+  if (html !== undefined) {
+    const cut = Math.max(html.lastIndexOf("/"), html.lastIndexOf("\\"));
+    const folder = cut < 0 ? "." : html.slice(0, cut) || "/";
+    const name = html.slice(cut + 1);
+    try {
+      io.stderr(`flexura: wrote the calculation sheet ${io.writeText(folder, name, calculationSheet(analysis, { input }))}\n`);
+    } catch (e) {
+      const failure = fileFailure(e);
+      const message = `cannot write ${html}: ${failure.problems[0]?.message ?? "unknown reason"}`;
+      return reportFailure(file, { exitCode: EXIT.file, problems: [{ code: failure.problems[0]?.code ?? "file-unwritable", path: "", message }], writing: true }, json, io);
+    }
+  }
+  io.stdout(json ? `${JSON.stringify(analysisToJson(analysis), null, 2)}\n` : textReport(analysis, { input }));
   return EXIT.ok;
 }
 

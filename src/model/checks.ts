@@ -69,7 +69,8 @@ function inModelUnits(c: CheckResult, model: Model, scale: ModelScale, context: 
     case "bending-tension":
     case "bending-compression": {
       const sense = c.check === "bending-tension" ? "tension" : "compression";
-      const inPart = context.part === undefined ? "" : ` in part ${context.part}`;
+      // Text numbers parts from 1, as spans and supports are; the `part` field stays the index into `section.parts`.
+      const inPart = context.part === undefined ? "" : ` in part ${context.part + 1}`;
       const capacity = c.capacity / scale.stress;
       return {
         kind: c.check,
@@ -91,7 +92,7 @@ function inModelUnits(c: CheckResult, model: Model, scale: ModelScale, context: 
         demand: c.demand / scale.stress,
         capacity,
         unit: units.stress,
-        description: `peak shear stress${context.part === undefined ? "" : ` in part ${context.part}`} against ${fmt(capacity)} ${units.stress}`,
+        description: `peak shear stress${context.part === undefined ? "" : ` in part ${context.part + 1}`} against ${fmt(capacity)} ${units.stress}`,
         ...(c.at.y === undefined ? {} : { y: c.at.y / scale.sectionLength }),
         ...(context.part === undefined ? {} : { part: context.part }),
       };

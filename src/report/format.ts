@@ -95,3 +95,20 @@ export function textTable(rows: readonly (readonly string[])[]): string {
 export function snapToZero(value: number, reference: number): number {
   return Math.abs(value) <= 1e-9 * Math.abs(reference) ? 0 : value;
 }
+
+/**
+ * A utilisation to three significant figures, trailing zeros kept (1.196 is "1.20", never "1.2").
+ *
+ * @param value - demand / capacity (finite, >= 0).
+ * @example
+ * ```ts
+ * utilisationText(1.196); // "1.20"
+ * ```
+ */
+export function utilisationText(value: number): string {
+  if (!Number.isFinite(value)) return "not finite";
+  if (value === 0) return "0.00";
+  if (Math.abs(value) >= 1000) return value.toFixed(0);
+  const t = value.toPrecision(3);
+  return t.includes("e") ? Number(t).toString() : t;
+}

@@ -1,6 +1,6 @@
 export { escapeXml } from "./escape.js";
 export { svgNumber, svgElement, svgText, svgPolyline, svgPolygon, svgDocument, type SvgAttributes } from "./svg.js";
-export { formatReportNumber, formatReportQuantity, snapToZero, textTable } from "./format.js";
+export { formatReportNumber, formatReportQuantity, snapToZero, textTable, utilisationText } from "./format.js";
 export { sampleDiagram, diagramValueAt, SAMPLE_BUDGET, type SampleDiagramOptions } from "./sample.js";
 export { lineDiagramSvg, type LineDiagramData, type LineDiagramOptions, type DiagramPeak } from "./line-diagram.js";
 export type { MemberDrawing, DrawnSupport, DrawnSupportType, DrawnLoad } from "./member-drawing.js";
@@ -9,12 +9,11 @@ export { sectionSvg, type SectionDrawing, type DrawnSectionPart } from "./sectio
 export { REPORT_CAUTION } from "./caution.js";
 export { reportInputs } from "./text-inputs.js";
 export { reportForces, reportSection, reportChecks } from "./text-results.js";
-export { textReport, type TextReportOptions } from "./text-report.js";
+export { textReport, type TextReportOptions, type TextReportInput } from "./text-report.js";
 export { reportDiagrams, type ReportDiagram, type ReportDiagramName, type ReportDiagramsOptions } from "./diagrams.js";
 export {
   calculationSheet,
   calculationBook,
-  utilisationText,
   calculationFigure,
   figureDocument,
   placeLabels,

@@ -1,5 +1,5 @@
 import type { ModelAnalysis, ModelPeaks } from "../model/index.js";
-import { formatReportNumber, formatReportQuantity, snapToZero, textTable } from "./format.js";
+import { formatReportQuantity, snapToZero, textTable, utilisationText } from "./format.js";
 
 function indent(text: string): string {
   return text
@@ -92,7 +92,7 @@ export function reportSection(analysis: ModelAnalysis): string {
         ["centroid z", formatReportQuantity(s.centroid.z, u.sectionLength)],
         ["second moment I_z (bending axis)", formatReportQuantity(s.secondMomentZ, u.secondMoment)],
         ["second moment I_y", formatReportQuantity(s.secondMomentY, u.secondMoment)],
-        ["product moment I_yz", formatReportQuantity(s.productMoment, u.secondMoment)],
+        ["product moment I_yz", formatReportQuantity(snapToZero(s.productMoment, Math.sqrt(Math.abs(s.secondMomentZ * s.secondMomentY))), u.secondMoment)],
         ["extreme fibre y, top (up from the centroid)", formatReportQuantity(s.extremes.top, u.sectionLength)],
         ["extreme fibre y, bottom", formatReportQuantity(s.extremes.bottom, u.sectionLength)],
         ["section modulus, top", formatReportQuantity(s.sectionModulus.top, u.sectionModulus)],
@@ -110,7 +110,7 @@ export function reportSection(analysis: ModelAnalysis): string {
       ["largest compression", formatReportQuantity(st.compression.value, u.stress), where(st.compression.at, st.compression.y)],
     ];
     if (st.shear !== undefined) rows.push(["largest shear stress", formatReportQuantity(st.shear.value, u.stress), `x = ${formatReportQuantity(st.shear.at, u.length)}`]);
-    for (const p of st.shearByPart ?? []) rows.push([`largest shear stress, part ${p.part}`, formatReportQuantity(p.value, u.stress), where(p.at, p.y)]);
+    for (const p of st.shearByPart ?? []) rows.push([`largest shear stress, part ${p.part + 1}`, formatReportQuantity(p.value, u.stress), where(p.at, p.y)]);
     out.push(indent(textTable(rows)));
   }
   return out.join("\n");
@@ -139,7 +139,7 @@ export function reportChecks(analysis: ModelAnalysis): string {
             c.description,
             formatReportQuantity(c.demand, c.unit),
             formatReportQuantity(c.capacity, c.unit),
-            formatReportNumber(c.utilisation, 3),
+            utilisationText(c.utilisation),
             c.pass ? "PASS" : "FAIL",
           ]),
         ]),
@@ -149,8 +149,8 @@ export function reportChecks(analysis: ModelAnalysis): string {
     out.push(
       "",
       failed === 0
-        ? `  Overall: PASS (all ${analysis.checks.length} checks pass)`
-        : `  Overall: FAIL (${failed} of ${analysis.checks.length} checks fail)`,
+        ? `  Overall: PASS (${analysis.checks.length === 1 ? "the one check passes" : `all ${analysis.checks.length} checks pass`})`
+        : `  Overall: FAIL (${analysis.checks.length === 1 ? "the one check fails" : `${failed} of ${analysis.checks.length} checks fail`})`,
     );
   }
   if (analysis.warnings.length > 0) {

@@ -100,7 +100,7 @@ describe("report parts", () => {
       warnings: [{ code: "no-section", message: "No section was given, so stresses were not checked." }],
     });
     const text = reportChecks(failing);
-    expect(text).toMatch(/deflection against span\/360\s+20 mm\s+16\.67 mm\s+1\.2\s+FAIL/);
+    expect(text).toMatch(/deflection against span\/360\s+20 mm\s+16\.67 mm\s+1\.20\s+FAIL/);
     expect(text).toContain("Overall: FAIL (1 of 2 checks fail)");
     expect(text).toContain("- No section was given, so stresses were not checked. [no-section]");
     expect(reportChecks(simpleSpanAnalysis({ checks: [] }))).toContain("No limits given, so nothing was checked.");

@@ -1,4 +1,4 @@
-export { calculationSheet, calculationBook, utilisationText, type CalculationSheetJob, type CalculationSheetInput, type CalculationSheetOptions, type CalculationBookMember } from "./sheet.js";
+export { calculationSheet, calculationBook, type CalculationSheetJob, type CalculationSheetInput, type CalculationSheetOptions, type CalculationBookMember } from "./sheet.js";
 export { calculationFigure, figureDocument, type CalculationFigure, type CalculationFigureOptions } from "./figure.js";
 export { placeLabels, textBox, boxesOverlap, defaultCandidates, LABEL_FONT, CHARACTER_ADVANCE, type LabelBox, type LabelAnchor, type LabelCandidate, type LabelRequest, type PlacedLabel, type LabelPlacement } from "./labels.js";
 export { sha256Hex } from "./sha256.js";

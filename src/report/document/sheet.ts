@@ -1,7 +1,7 @@
 import type { Model, ModelAnalysis, ModelCheck, ModelLoad } from "../../model/index.js";
 import { REPORT_CAUTION } from "../caution.js";
 import { escapeXml } from "../escape.js";
-import { formatReportNumber, snapToZero } from "../format.js";
+import { formatReportNumber, snapToZero, utilisationText } from "../format.js";
 import { calculationFigure, type CalculationFigure } from "./figure.js";
 import { sha256Hex } from "./sha256.js";
 import { printedUnit } from "./units.js";
@@ -130,10 +130,16 @@ function memberPage(analysis: ModelAnalysis, options: CalculationSheetOptions): 
   if (figure.simplified) {
     out.push(`<p class="warning" data-flag="figure-simplified">The figure is simplified for a member with ${model.supports.length} supports and ${model.loads.length} loads: labels other than the peaks are left out; the tables give every value.</p>`);
   }
-  out.push(figureBlock(figure));
+  out.push(figureBlock(figure, figureHeight(analysis, figure)));
   out.push(`<div class="columns">`);
-  out.push(`<div>${inputs(model, notes, plain)}\n${method(analysis)}</div>`);
-  out.push(results(analysis, plain));
+  const [left, right] = columnLines(analysis);
+  if (left <= right) {
+    out.push(`<div>${inputs(model, notes, plain)}\n${method(analysis)}</div>`);
+    out.push(results(analysis, plain));
+  } else {
+    out.push(inputs(model, notes, plain));
+    out.push(`<div>${results(analysis, plain)}\n${method(analysis)}</div>`);
+  }
   out.push(`</div>`);
   out.push(checks(analysis, plain, notes));
   if (notes.items.length > 0) {
@@ -225,11 +231,10 @@ function inputs(model: Model, notes: Notes, plain: boolean): string {
       if (list === undefined) byCase.set(key, [l]);
       else list.push(l);
     }
-    for (const [name, loads] of byCase) {
-      const label = name === "" ? "Loads with no case named" : `Case ${notes.short(name)}`;
-      out.push(`<p class="case">${label}</p>`);
-      out.push(table(["#", "type", "position", "value"], loads.map((l, i) => [String(i + 1), ...loadCells(model, l, plain)]), loads.length > MANY_ROWS ? "many" : ""));
-    }
+    // One table, grouped by case in the order the cases first appear; loads numbered within their case.
+    const rows: string[][] = [];
+    for (const [name, loads] of byCase) loads.forEach((l, i) => rows.push([name === "" ? "(none)" : notes.short(name), String(i + 1), ...loadCells(model, l, plain)]));
+    out.push(table(["case", "#", "type", "position", "value"], rows, model.loads.length > MANY_ROWS ? "many" : ""));
   }
   out.push(`<h3>Limits</h3><p>${limitsText(model, plain)}</p>`);
   out.push(`</section>`);
@@ -315,29 +320,34 @@ function results(analysis: ModelAnalysis, plain: boolean): string {
   return out.join("\n");
 }
 
-function figureBlock(figure: CalculationFigure): string {
+/**
+ * The printed height of the figure (mm), shrunk from 84 mm as the tables grow so that an ordinary
+ * member still prints on one page: an estimate of the text lines of the taller column, the checks and
+ * the list of unlabelled values, about 3 mm each at the sheet's type size, against what the page leaves.
+ */
+function figureHeight(analysis: ModelAnalysis, figure: CalculationFigure): number {
+  const [left, right] = columnLines(analysis);
+  const method = 13;
+  const lines = Math.max(left + (left <= right ? method : 0), right + (left <= right ? 0 : method)) + analysis.checks.length + 4 + analysis.warnings.length;
+  const unplaced = figure.unplaced.length === 0 ? 0 : Math.ceil(figure.unplaced.join("; ").length / 150);
+  return Math.round(Math.max(62, Math.min(84, 84 - (lines + unplaced - 48) * 3.2)));
+}
+
+/** Estimated text lines of the inputs and the results columns, before the method statement. */
+function columnLines(analysis: ModelAnalysis): readonly [number, number] {
+  const model = analysis.model;
+  const left = 16 + model.supports.length + model.loads.length + (model.segments?.length ?? 0) + (model.hinges.length > 0 ? 1 : 0);
+  const stressRows = analysis.stress === undefined ? 0 : 4 + (analysis.stress.shearByPart?.length ?? 0);
+  const right = 12 + analysis.reactions.length + (analysis.section === undefined ? 0 : 8) + stressRows;
+  return [left, right];
+}
+
+function figureBlock(figure: CalculationFigure, heightMm: number): string {
   const missing =
     figure.unplaced.length === 0
       ? ""
       : `<p class="unplaced">Values not labelled on the figure for want of room: ${figure.unplaced.map((t) => escapeXml(t)).join("; ")}.</p>`;
-  return `<section id="figure"><h2>1 Figure</h2><figure>${figure.svg}<figcaption>Member, shear, moment and deflection on one x axis; faint guides carry supports, hinges and load positions down through the plots.</figcaption></figure>${missing}</section>`;
-}
-
-/**
- * A utilisation to three significant figures, trailing zeros kept (1.196 is "1.20", never "1.2").
- *
- * @param value - demand / capacity (finite, >= 0).
- * @example
- * ```ts
- * utilisationText(1.196); // "1.20"
- * ```
- */
-export function utilisationText(value: number): string {
-  if (!Number.isFinite(value)) return "not finite";
-  if (value === 0) return "0.00";
-  if (Math.abs(value) >= 1000) return value.toFixed(0);
-  const t = value.toPrecision(3);
-  return t.includes("e") ? Number(t).toString() : t;
+  return `<section id="figure"><h2>1 Figure</h2><figure style="--figure-height:${heightMm}mm">${figure.svg}<figcaption>Member, shear, moment and deflection on one x axis; faint guides carry supports, hinges and load positions down through the plots.</figcaption></figure>${missing}</section>`;
 }
 
 function checks(analysis: ModelAnalysis, plain: boolean, notes: Notes): string {
@@ -348,11 +358,10 @@ function checks(analysis: ModelAnalysis, plain: boolean, notes: Notes): string {
   } else {
     const failed = list.filter((c) => !c.pass).length;
     const governing = list.reduce((a, b) => (b.utilisation > a.utilisation ? b : a));
-    const word = list.length === 1 ? "check" : "checks";
     out.push(
       failed === 0
         ? `<p class="verdict pass" data-verdict="pass"><strong>PASS</strong>: ${list.length === 1 ? "the one check passes" : `all ${list.length} checks pass`}; the largest utilisation is ${utilisationText(governing.utilisation)} (${escapeXml(governing.description)}).</p>`
-        : `<p class="verdict fail" data-verdict="fail"><strong>FAIL</strong>: ${failed} of ${list.length} ${word} ${failed === 1 ? "fails" : "fail"}; the largest utilisation is ${utilisationText(governing.utilisation)} (${escapeXml(governing.description)}).</p>`,
+        : `<p class="verdict fail" data-verdict="fail"><strong>FAIL</strong>: ${list.length === 1 ? "the one check fails" : `${failed} of ${list.length} checks fail`}; the largest utilisation is ${utilisationText(governing.utilisation)} (${escapeXml(governing.description)}).</p>`,
     );
     out.push(
       table(
@@ -404,7 +413,7 @@ function css(paper: "a4" | "letter"): string {
     `.columns{display:grid;grid-template-columns:1fr 1fr;column-gap:10pt}`,
     `.columns section{min-width:0;overflow-wrap:anywhere}`,
     `figure{margin:2pt 0;break-inside:avoid}`,
-    `figure svg{display:block;margin:0 auto;width:100%;height:auto;max-height:84mm}`,
+    `figure svg{display:block;margin:0 auto;width:100%;height:auto;max-height:var(--figure-height,84mm)}`,
     `figcaption{font-size:6.5pt;color:#333}`,
     `.verdict{font-size:9pt;margin-top:3pt}`,
     `.caution{margin-top:3pt}`,

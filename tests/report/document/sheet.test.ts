@@ -75,7 +75,7 @@ describe("calculationSheet", () => {
     // PL^3/(48 EI) = 10 * 6^3 / (48 * 200e6 kPa * 8e-5 m^4) = 2.8125 mm (AISC Manual Table 3-23 case 7, from memory) against 6000/5000 = 1.2 mm: 2.34.
     const fail = calculationSheet(analyzeModel(parseModel({ ...base, limits: { deflection: "span/5000" } })));
     expect(fail).toContain('data-verdict="fail"');
-    expect(fail).toContain("1 of 1 check fails");
+    expect(fail).toContain("the one check fails");
     expect(fail).toContain("<td>2.34</td>");
   });
 
@@ -116,5 +116,15 @@ describe("calculationSheet", () => {
     expect(html).toMatch(/2001 supports; largest upward reaction/);
     // 2,000 rollers in the supports table and 2,000 in the reactions table.
     expect(html.match(/<td>roller<\/td>/g)?.length).toBe(4000);
+  });
+});
+
+describe("textReport header", () => {
+  it("names the program version and the input file with its SHA-256", async () => {
+    const { textReport } = await import("../../../src/report/index.js");
+    const [first] = examples();
+    const text = textReport(first!.analysis, { input: { name: first!.file, bytes: first!.text } });
+    expect(text).toContain(`Program: flexura ${FLEXURA_VERSION}`);
+    expect(text).toContain(`Input: ${first!.file} (SHA-256 ${createHash("sha256").update(first!.text, "utf8").digest("hex")})`);
   });
 });
