@@ -15,6 +15,8 @@ export {
   calculationSheet,
   calculationBook,
   calculationFigure,
+  sectionStressFigure,
+  type SectionStressFigureOptions,
   figureDocument,
   placeLabels,
   textBox,
