@@ -1,5 +1,5 @@
 import { analysisToJson, modelSchema, type ModelAnalysis } from "../model/index.js";
-import { calculationSheet, formatReportNumber, reportDiagrams, textReport } from "../report/index.js";
+import { calculationFigure, calculationSheet, figureDocument, formatReportNumber, reportDiagrams, textReport } from "../report/index.js";
 import { parseCommandLine } from "./args.js";
 import { EXIT, type ExitCode } from "./exit-codes.js";
 import { HELP } from "./help.js";
@@ -111,7 +111,8 @@ function analyzeCommand(file: string, json: boolean, svg: string | undefined, io
   const analysis = loaded.analysis;
   if (svg !== undefined) {
     const written: string[] = [];
-    for (const d of reportDiagrams(analysis)) {
+    const drawings = [...reportDiagrams(analysis), { name: "figure", svg: figureDocument(calculationFigure(analysis)) }];
+    for (const d of drawings) {
       const name = `${baseName(file)}-${d.name}.svg`;
       try {
         written.push(io.writeText(svg, name, d.svg));

@@ -17,6 +17,8 @@ export {
   calculationSheet,
   calculationBook,
   calculationFigure,
+  sectionStressFigure,
+  type SectionStressFigureOptions,
   figureDocument,
   placeLabels,
   textBox,

@@ -120,8 +120,9 @@ describe("runCli: analyze and check", () => {
     const report = io.out.join("");
     expect(report).toContain("flexura report: Stiff test beam");
     expect(report).toContain("Local codes govern.");
-    expect([...io.written.keys()]).toEqual(["member", "shear", "moment", "deflection"].map((n) => `diagrams/passes-check-${n}.svg`));
-    expect(io.err.join("")).toContain("wrote 4 diagrams");
+    expect([...io.written.keys()]).toEqual(["member", "shear", "moment", "deflection", "figure"].map((n) => `diagrams/passes-check-${n}.svg`));
+    expect(io.written.get("diagrams/passes-check-figure.svg")).toMatch(/^<\?xml[^]*<svg[^]*Shear force V/);
+    expect(io.err.join("")).toContain("wrote 5 diagrams");
   });
   test("runCli(analyze --svg) reports a folder it cannot write to with exit 3", () => {
     const io = { ...memoryIo(), writeText: (): string => { throw Object.assign(new Error("EACCES"), { code: "EACCES" }); } };

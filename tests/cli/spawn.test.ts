@@ -65,7 +65,7 @@ describe("flexura command (spawned)", () => {
       expect(r.code).toBe(0);
       expect(JSON.parse(r.stdout)).toHaveProperty("reactions");
       expect(existsSync(out)).toBe(true);
-      expect(readdirSync(out).sort()).toEqual(["passes-check-deflection.svg", "passes-check-member.svg", "passes-check-moment.svg", "passes-check-shear.svg"]);
+      expect(readdirSync(out).sort()).toEqual(["passes-check-deflection.svg", "passes-check-figure.svg", "passes-check-member.svg", "passes-check-moment.svg", "passes-check-shear.svg"]);
     } finally {
       rmSync(dir, { recursive: true, force: true });
     }

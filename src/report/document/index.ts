@@ -4,3 +4,4 @@ export { placeLabels, textBox, boxesOverlap, defaultCandidates, LABEL_FONT, CHAR
 export { sha256Hex } from "./sha256.js";
 export { printedUnit } from "./units.js";
 export { FLEXURA_VERSION } from "./version.js";
+export { sectionStressFigure, type SectionStressFigureOptions } from "./section-figure.js";

@@ -3,6 +3,7 @@ import { REPORT_CAUTION } from "../caution.js";
 import { escapeXml } from "../escape.js";
 import { formatReportNumber, snapToZero, utilisationText } from "../format.js";
 import { calculationFigure, type CalculationFigure } from "./figure.js";
+import { sectionStressFigure } from "./section-figure.js";
 import { sha256Hex } from "./sha256.js";
 import { printedUnit } from "./units.js";
 import { FLEXURA_VERSION } from "./version.js";
@@ -315,6 +316,10 @@ function results(analysis: ModelAnalysis, plain: boolean): string {
     if (st.shear !== undefined) rows.push(["shear, largest", q(st.shear.value, u.stress, plain), q(st.shear.at, u.length, plain), q(st.shear.y, u.sectionLength, plain)]);
     for (const p of st.shearByPart ?? []) rows.push([`shear in part ${p.part + 1}`, q(p.value, u.stress, plain), q(p.at, u.length, plain), q(p.y, u.sectionLength, plain)]);
     out.push(table(["stress", "value", "at x", "fibre y"], rows));
+    if (isMultiMaterial(analysis)) {
+      const f = sectionStressFigure(analysis, { plainUnits: plain });
+      if (f !== undefined) out.push(`<figure class="section-figure" id="section-figure">${f.svg}</figure>`);
+    }
   }
   out.push(`</section>`);
   return out.join("\n");
@@ -327,10 +332,15 @@ function results(analysis: ModelAnalysis, plain: boolean): string {
  */
 function figureHeight(analysis: ModelAnalysis, figure: CalculationFigure): number {
   const [left, right] = columnLines(analysis);
-  const method = 13;
+  const method = 10;
   const lines = Math.max(left + (left <= right ? method : 0), right + (left <= right ? 0 : method)) + analysis.checks.length + 4 + analysis.warnings.length;
   const unplaced = figure.unplaced.length === 0 ? 0 : Math.ceil(figure.unplaced.join("; ").length / 150);
-  return Math.round(Math.max(62, Math.min(84, 84 - (lines + unplaced - 48) * 3.2)));
+  return Math.round(Math.max(58, Math.min(84, 84 - (lines + unplaced - 48) * 3.2)));
+}
+
+/** Whether the analysis's section has parts of more than one material (its stresses then differ by part). */
+function isMultiMaterial(analysis: ModelAnalysis): boolean {
+  return analysis.stress?.tension.part !== undefined || analysis.stress?.compression.part !== undefined || (analysis.stress?.shearByPart?.length ?? 0) > 0;
 }
 
 /** Estimated text lines of the inputs and the results columns, before the method statement. */
@@ -338,7 +348,7 @@ function columnLines(analysis: ModelAnalysis): readonly [number, number] {
   const model = analysis.model;
   const left = 16 + model.supports.length + model.loads.length + (model.segments?.length ?? 0) + (model.hinges.length > 0 ? 1 : 0);
   const stressRows = analysis.stress === undefined ? 0 : 4 + (analysis.stress.shearByPart?.length ?? 0);
-  const right = 12 + analysis.reactions.length + (analysis.section === undefined ? 0 : 8) + stressRows;
+  const right = 12 + analysis.reactions.length + (analysis.section === undefined ? 0 : 8) + stressRows + (isMultiMaterial(analysis) ? 17 : 0);
   return [left, right];
 }
 
@@ -381,9 +391,9 @@ function method(analysis: ModelAnalysis): string {
   const hasSection = analysis.section !== undefined;
   return (
     `<section id="method"><h2>4 Method and limitations</h2>` +
-    `<p>Elastic, first-order analysis of a straight member by Euler–Bernoulli beam theory: plane sections remain plane, deflections are small, shear deformation is neglected; ` +
-    `curvature κ = M / (E I), bending stress σ = −M y / I, shear stress τ = V Q / (I b). Loads are piecewise polynomials and every result is an exact piecewise polynomial; peaks are found from the roots of their derivatives, not from samples.</p>` +
-    `<p>Not checked here: lateral-torsional and local buckling, bearing and web crippling, connections, vibration, fatigue, fire, second-order and dynamic effects${hasSection ? "" : ", and stresses (no section was given)"}; loads and their combination are the user's.</p>` +
+    `<p>Elastic, first-order Euler–Bernoulli analysis of a straight member (plane sections, small deflections, no shear deformation): ` +
+    `κ = M / (E I), σ = −M y / I, τ = V Q / (I b). Results are exact piecewise polynomials; peaks come from roots of their derivatives, not samples.</p>` +
+    `<p>Not checked: lateral-torsional and local buckling, bearing, connections, vibration, fatigue, fire, second-order and dynamic effects${hasSection ? "" : ", stresses (no section given)"}; the loads are the user's.</p>` +
     `<p class="caution"><strong>${escapeXml(REPORT_CAUTION)}</strong></p>` +
     `</section>`
   );
@@ -404,6 +414,7 @@ function css(paper: "a4" | "letter"): string {
     `.data td{white-space:nowrap}`,
     `.data td.text{white-space:normal}`,
     `.data.many{font-size:6.5pt}`,
+    `#checks .data{font-size:6.6pt}`,
     `.pairs th{text-align:left;font-weight:normal;color:#333;padding:0 6pt 0 0;vertical-align:top;white-space:nowrap}`,
     `.title-block{width:100%;border:1pt solid #111}`,
     `.title-block td{border:0.5pt solid #111;padding:0.8pt 4pt;vertical-align:top;overflow-wrap:anywhere}`,
@@ -415,6 +426,8 @@ function css(paper: "a4" | "letter"): string {
     `figure{margin:2pt 0;break-inside:avoid}`,
     `figure svg{display:block;margin:0 auto;width:100%;height:auto;max-height:var(--figure-height,84mm)}`,
     `figcaption{font-size:6.5pt;color:#333}`,
+    `.section-figure{margin:1pt 0}`,
+    `.section-figure svg{max-height:46mm}`,
     `.verdict{font-size:9pt;margin-top:3pt}`,
     `.caution{margin-top:3pt}`,
     `.warning{border:0.6pt solid #111;padding:2pt}`,
