@@ -1,19 +1,21 @@
 import { isFlexuraError } from "../errors/index.js";
 import { analysisToJson, analyzeModel, parseModel, type ModelAnalysis } from "../model/index.js";
+import { cachedIn, cellCache, clearCellCache } from "./cell-cache.js";
 import { sheetError, type SheetError } from "./cells.js";
 import { sheetPlace, type ModelJson } from "./member.js";
 
 /**
- * How many analysed members the sheet functions keep (least recently used first out). The cells that ask
- * about one member (its reactions, peaks, a moment at a position) share one solve; 512 members cover a
- * sheet of a few hundred members with room to spare, at a few kilobytes each. Two maps of this size are kept:
- * one by the model read from the cells, one by the cells as the engine handed them (so that a warm
- * recalculation does not read the ranges again); both hold the same analyses.
+ * How many results the sheet functions keep (least recently used first out). The cells that ask about one
+ * member (its reactions, peaks, a moment at a position) share one solve. Two caches of this size are kept: one
+ * by the cells as the engine handed them, per kind of reading (a member, a section, a member with its checks,
+ * envelopes, a case-by-case solve), so that a warm recalculation does not read the ranges again; and one by the
+ * model read from the cells, so that two spellings of one member share a solve. 2,048 covers a sheet of 500
+ * members asked for their results, their section and their checks (1,500 entries) with room to spare; an analysed member takes about 11 KB, so the cache holds at most about 22 MB.
  */
-export const SHEET_CACHE_SIZE = 512;
+export const SHEET_CACHE_SIZE = 2048;
 
 const cache = new Map<string, ModelAnalysis | SheetError>();
-const byCells = new Map<string, unknown>();
+const byCells = cellCache(SHEET_CACHE_SIZE);
 let solves = 0;
 
 /**
@@ -32,7 +34,7 @@ export function countSolve(): void {
 /** Empties the cache of analysed members. */
 export function clearSheetCache(): void {
   cache.clear();
-  byCells.clear();
+  clearCellCache(byCells);
 }
 
 /** Looks a key up in a least-recently-used map, marking it used. */
@@ -52,51 +54,13 @@ function keep<T>(map: Map<string, T>, key: string, value: T): void {
 }
 
 /**
- * A key for plain cell values exactly as the engine handed them (numbers, texts, logicals, blanks, rows of them),
- * telling apart everything the readers tell apart (6 from "6", NaN from a blank); `undefined` for anything else,
- * which is then not cached by its cells.
- */
-export function cellsKey(value: unknown): string | undefined {
-  switch (typeof value) {
-    case "number":
-      return Object.is(value, -0) ? "-0" : String(value);
-    case "string":
-      // Length-prefixed: unambiguous without escaping, since the length says where the text ends.
-      return `'${value.length}:${value}`;
-    case "boolean":
-      return value ? "T" : "F";
-    case "undefined":
-      return "U";
-    case "object": {
-      if (value === null) return "N";
-      if (!Array.isArray(value)) return undefined;
-      let key = "[";
-      for (let i = 0; i < value.length; i++) {
-        const part = cellsKey(value[i]);
-        if (part === undefined) return undefined;
-        key += i === 0 ? part : `,${part}`;
-      }
-      return `${key}]`;
-    }
-    default:
-      return undefined;
-  }
-}
-
-/**
- * The result for a function's cells, read and analysed once while it stays in the cache: the cells' own key is
- * looked up first, so a warm recalculation neither re-reads the ranges into a model nor serialises it. `kind`
- * names what the cells are read as (a member, a section, a checked member), `read` builds the result on a miss.
+ * The result for a function's cells, read and analysed once while it stays in the cache: the cells as the
+ * engine handed them are looked up first (by a hash, confirmed cell by cell), so a warm recalculation neither
+ * re-reads the ranges into a model nor serialises it. `kind` names what the cells are read as (a member, a
+ * section, a checked member, envelopes), `read` builds the result on a miss.
  */
 export function cachedByCells<T>(kind: string, cells: readonly unknown[], read: () => T): T {
-  const k = cellsKey(cells);
-  if (k === undefined) return read();
-  const key = `${kind}:${k}`;
-  const hit = lookUp(byCells, key) as T | undefined;
-  if (hit !== undefined) return hit;
-  const result = read();
-  keep(byCells, key, result);
-  return result;
+  return cachedIn(byCells, kind, cells, read);
 }
 
 /** The library's error as the cell shows it: every issue, in the sheet's words (`place` says where a path is). */

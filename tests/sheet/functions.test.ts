@@ -15,7 +15,6 @@ import {
   sheetSolveCount,
   sheetStations,
   SHEET_CACHE_SIZE,
-  cellsKey,
   type SheetValue,
 } from "../../src/sheet/index.js";
 
@@ -97,12 +96,6 @@ describe("sheet functions", () => {
 });
 
 describe("the cache by cells", () => {
-  test("cellsKey tells apart what the readers tell apart, and refuses what it cannot key", () => {
-    const keys = [6, "6", " 6", null, undefined, Number.NaN, Infinity, -Infinity, 0, -0, true, "true", [], [null], [[6]], ["a,b"], ["a", "b"]].map(cellsKey);
-    expect(new Set(keys).size).toBe(keys.length);
-    expect(cellsKey([{}])).toBeUndefined();
-    expect(cellsKey([Symbol.iterator])).toBeUndefined();
-  });
   test("a warm cache never answers for other cells: NaN where a blank was is an error, not the blank's number", () => {
     clearSheetCache();
     const uniform = [["distributed", null, null, 12, null]];

@@ -26,7 +26,8 @@ export interface IShapeClassification {
   readonly web: ElementSlenderness;
 }
 
-function classOf(ratio: number, p: number, r: number): ElementClass {
+/** @internal compact (ratio <= p), noncompact (p < ratio <= r) or slender. */
+export function classOf(ratio: number, p: number, r: number): ElementClass {
   return ratio <= p ? "compact" : ratio <= r ? "noncompact" : "slender";
 }
 
@@ -59,7 +60,8 @@ export function classifyIShape(shape: IShapeForDesign, steel: SteelForDesign): I
 /** @internal {@link classifyIShape} on a shape and steel already checked. */
 export function classifyCheckedIShape(shape: IShapeForDesign, steel: SteelForDesign): IShapeClassification {
   const root = Math.sqrt(steel.elasticModulus / steel.yieldStrength);
-  const flangeRatio = shape.flangeWidth / (2 * shape.flangeThickness);
+  // Table B4.1b note: b is half the flange width of an I, the full flange width of a channel
+  const flangeRatio = shape.form === "channel" ? shape.flangeWidth / shape.flangeThickness : shape.flangeWidth / (2 * shape.flangeThickness);
   const fp = 0.38 * root;
   const fr = shape.rolled ? 1.0 * root : 0.95 * Math.sqrt((flangeBucklingCoefficient(shape) * steel.elasticModulus) / (0.7 * steel.yieldStrength));
   const webRatio = shape.webHeight / shape.webThickness;

@@ -17,6 +17,8 @@ export interface BucklingLengths {
   readonly effectiveRadius: number;
   /** h_0 = d - t_f, distance between flange centroids (length). */
   readonly flangeCentroidDistance: number;
+  /** c of F2-8: 1 for a doubly symmetric I (F2-8a), (h_0 / 2) sqrt(I_y / C_w) for a channel (F2-8b). */
+  readonly torsionCoefficient: number;
 }
 
 /** A nominal flexural strength and how it was reached. */
@@ -40,7 +42,8 @@ export interface NominalFlexure {
 }
 
 /**
- * L_p, L_r, r_ts and h_0 of a doubly symmetric I-shape, AISC 360-16 F2-5 to F2-8 (c = 1).
+ * L_p, L_r, r_ts, h_0 and c of a doubly symmetric I-shape or a channel, AISC 360-16 F2-5 to F2-8
+ * (c = 1 for the I, F2-8a; c = (h_0 / 2) sqrt(I_y / C_w) for a channel, F2-8b).
  *
  * @example
  * ```ts
@@ -55,11 +58,12 @@ function lengthsOf(shape: IShapeForDesign, steel: SteelForDesign): BucklingLengt
   const { elasticModulus: E, yieldStrength: Fy } = steel;
   const rts = Math.sqrt(Math.sqrt(shape.minorMomentOfInertia * shape.warpingConstant) / shape.sectionModulus);
   const h0 = shape.depth - shape.flangeThickness;
-  const jTerm = shape.torsionConstant / (shape.sectionModulus * h0);
+  const c = shape.form === "channel" ? (h0 / 2) * Math.sqrt(shape.minorMomentOfInertia / shape.warpingConstant) : 1;
+  const jTerm = (shape.torsionConstant * c) / (shape.sectionModulus * h0);
   const ratio = (0.7 * Fy) / E;
   const lp = 1.76 * shape.minorRadiusOfGyration * Math.sqrt(E / Fy);
   const lr = 1.95 * rts * (E / (0.7 * Fy)) * Math.sqrt(jTerm + Math.sqrt(jTerm * jTerm + 6.76 * ratio * ratio));
-  return Object.freeze({ plastic: lp, inelastic: lr, effectiveRadius: rts, flangeCentroidDistance: h0 });
+  return Object.freeze({ plastic: lp, inelastic: lr, effectiveRadius: rts, flangeCentroidDistance: h0, torsionCoefficient: c });
 }
 
 /**
@@ -109,13 +113,20 @@ export function nominalFlexureChecked(shape: IShapeForDesign, steel: SteelForDes
       ltbEquation = "F2-2";
     } else {
       const slender = Lb / lengths.effectiveRadius;
-      const jTerm = shape.torsionConstant / (Sx * lengths.flangeCentroidDistance);
+      const jTerm = (shape.torsionConstant * lengths.torsionCoefficient) / (Sx * lengths.flangeCentroidDistance);
       const Fcr = ((momentGradient * Math.PI * Math.PI * E) / (slender * slender)) * Math.sqrt(1 + 0.078 * jTerm * slender * slender);
       ltb = Math.min(Mp, Fcr * Sx);
       ltbEquation = "F2-3";
     }
   }
   const flange = classification.flange;
+  if (shape.form === "channel" && flange.class !== "compact")
+    fail(
+      "rule-not-covered",
+      ["shape", "flangeWidth"],
+      `The channel's flange is ${flange.class} (b/t = ${flange.ratio.toPrecision(4)} > ${flange.compactLimit.toPrecision(4)}, ${flange.clause}): AISC 360-16 F2 covers channels with compact flanges, and F3 is for I-shapes; flexura computes no strength for it.`,
+      { ratio: flange.ratio, limit: flange.compactLimit },
+    );
   let flb: number | null = null;
   let flbEquation = "";
   if (flange.class === "noncompact") {

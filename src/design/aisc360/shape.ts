@@ -5,12 +5,18 @@ import { IssueCollector, fail, type IssuePath } from "../../errors/index.js";
 import { readPositive, readRecord, refuseUnknownKeys } from "../read.js";
 
 /**
- * A doubly symmetric I-shape bent about its major axis, described by the properties that
- * AISC 360-16 Chapters F and G use. Every length in one unit (say in or mm), every property in
+ * A doubly symmetric I-shape (or, with `form: "channel"`, a rolled channel) bent about its major
+ * axis, described by the properties that AISC 360-16 Chapters F and G use. Every length in one unit (say in or mm), every property in
  * powers of it. Take them from the shape table that lists the section, or compute them for a
  * welded girder; flexura does not guess any of them.
  */
 export interface IShapeForDesign {
+  /**
+   * `"i-shape"` (the default) for a doubly symmetric I; `"channel"` for a rolled channel bent about
+   * its major axis (F2 with c = (h_0 / 2) sqrt(I_y / C_w), F2-8b; flange b = b_f in Table B4.1b; shear by
+   * G2.1(b)). Loads must pass through the channel's shear centre, or be restrained against twist.
+   */
+  readonly form?: "i-shape" | "channel";
   /** `true` for a hot-rolled shape, `false` for a welded (built-up) one: it selects Table B4.1b case 10 or 11 and G2.1(a). */
   readonly rolled: boolean;
   /** Overall depth d (length). */
@@ -49,6 +55,7 @@ export interface SteelForDesign {
 }
 
 const SHAPE_KEYS = [
+  "form",
   "rolled",
   "depth",
   "flangeWidth",
@@ -79,7 +86,13 @@ export function checkIShape(value: unknown, path: IssuePath = ["shape"]): IShape
   const rolled = Object.hasOwn(obj, "rolled") ? obj["rolled"] : undefined;
   if (typeof rolled !== "boolean")
     found.add("missing-field", [...path, "rolled"], "Say whether the shape is rolled (true) or welded (false): it selects the flange limit of AISC 360-16 Table B4.1b and the shear rule G2.1(a).", { field: "rolled" });
+  const form = Object.hasOwn(obj, "form") ? obj["form"] : "i-shape";
+  if (form !== "i-shape" && form !== "channel")
+    found.add("options-invalid", [...path, "form"], `The form must be "i-shape" or "channel"; got ${String(form)}.`);
+  else if (form === "channel" && rolled === false)
+    found.add("rule-not-covered", [...path, "rolled"], "AISC 360-16 F2 covers rolled channels; the flange limits of Table B4.1b for welded channels are not implemented in flexura.");
   const names: Record<(typeof SHAPE_KEYS)[number], string> = {
+    form: "",
     rolled: "",
     depth: "depth d",
     flangeWidth: "flange width b_f",
@@ -94,9 +107,9 @@ export function checkIShape(value: unknown, path: IssuePath = ["shape"]): IShape
     warpingConstant: "warping constant C_w",
   };
   const v = {} as Record<string, number>;
-  for (const key of SHAPE_KEYS) if (key !== "rolled") v[key] = readPositive(found, obj, key, path, names[key]);
+  for (const key of SHAPE_KEYS) if (key !== "rolled" && key !== "form") v[key] = readPositive(found, obj, key, path, names[key]);
   found.throwIfAny();
-  const s = v as unknown as Omit<IShapeForDesign, "rolled">;
+  const s = v as unknown as Omit<IShapeForDesign, "rolled" | "form">;
   if (!(2 * s.flangeThickness < s.depth))
     found.add("shape-inconsistent", [...path, "flangeThickness"], `Two flanges of ${s.flangeThickness} do not fit in a depth of ${s.depth}.`);
   if (!(s.webHeight <= s.depth - 2 * s.flangeThickness))
@@ -106,7 +119,7 @@ export function checkIShape(value: unknown, path: IssuePath = ["shape"]): IShape
   if (!(s.sectionModulus <= s.plasticModulus))
     found.add("shape-inconsistent", [...path, "plasticModulus"], `The plastic modulus Z_x (${s.plasticModulus}) cannot be below the elastic modulus S_x (${s.sectionModulus}).`);
   found.throwIfAny();
-  return Object.freeze({ rolled: rolled as boolean, ...s });
+  return Object.freeze({ form: form as "i-shape" | "channel", rolled: rolled as boolean, ...s });
 }
 
 /**

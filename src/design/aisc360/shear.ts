@@ -36,7 +36,8 @@ export function nominalShear(shape: IShapeForDesign, steel: SteelForDesign): Nom
   const { elasticModulus: E, yieldStrength: Fy } = steel;
   const ratio = shape.webHeight / shape.webThickness;
   const webArea = shape.depth * shape.webThickness;
-  const rolledLimit = shape.rolled && ratio <= 2.24 * Math.sqrt(E / Fy);
+  // G2.1(a) is for rolled I-shaped members only; channels take G2.1(b)
+  const rolledLimit = shape.rolled && shape.form !== "channel" && ratio <= 2.24 * Math.sqrt(E / Fy);
   const kv = 5.34;
   const limit = 1.1 * Math.sqrt((kv * E) / Fy);
   const coefficient = rolledLimit || ratio <= limit ? 1 : limit / ratio;
