@@ -13,6 +13,7 @@ export const entries = {
   sheet: "src/sheet/index.ts",
   design: "src/design/index.ts",
   combine: "src/combine/index.ts",
+  moving: "src/moving/index.ts",
 } as const;
 
 /**

@@ -14,6 +14,7 @@ import "./model.bench.js";
 import "./sheet.bench.js";
 import "./combine.bench.js";
 import "./design.bench.js";
+import "./moving.bench.js";
 
 const pattern = process.argv[2];
 await runAll(pattern ? new RegExp(pattern) : undefined);

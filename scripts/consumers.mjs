@@ -16,14 +16,17 @@ import { parseQuantity, type Quantity } from "flexura/units";
 import { sheetFunctions, type SheetValue } from "flexura/sheet";
 import { checkSteelBeam, type SteelBeamCheck } from "flexura/design";
 import { presetCombinations, type Combination } from "flexura/combine";
+import { influenceLine, type MemberInfluence } from "flexura/moving";
 const s: BeamSolution = solveBeam({ length: 4, stiffness: 1, supports: [{ kind: "pin", at: 0 }, { kind: "roller", at: 4 }], loads: [{ kind: "point", at: 2, value: 1 }] });
 const m: number = evaluatePiecewise(s.moment, 2);
 const a: ModelAnalysis | undefined = undefined as ModelAnalysis | undefined;
 const q: Quantity = parseQuantity("1 kN", "force");
 const sv: SheetValue | undefined = sheetFunctions[0]?.call();
 const sb: SteelBeamCheck | undefined = undefined as SteelBeamCheck | undefined;
+const il = influenceLine({ length: 4, stiffness: 1, supports: [{ kind: "pin", at: 0 }, { kind: "roller", at: 4 }] }, { kind: "moment", at: 2 });
+const mi: MemberInfluence | undefined = undefined as MemberInfluence | undefined;
 const cb: readonly Combination[] = presetCombinations("asce7-16-strength", [{ name: "D", category: "dead" }]).combinations;
-export const used = [m, a, q, sv, sb, checkSteelBeam, cb, isFlexuraError, iSection, sectionProperties, parseModel, analyzeModel, textReport, extremeBendingStresses, rectangle, checkMember];
+export const used = [il, mi, m, a, q, sv, sb, checkSteelBeam, cb, isFlexuraError, iSection, sectionProperties, parseModel, analyzeModel, textReport, extremeBendingStresses, rectangle, checkMember];
 `;
 
 /** Each row: a name, the compiler options, the source file's extension, and the package type around it. */

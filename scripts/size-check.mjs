@@ -25,6 +25,7 @@ const paths = [
   { name: "sections alone (flexura/section)", code: `export * from ${dist("section.js")};`, budget: 23 * KiB },
   { name: "checkMember (flexura/check)", code: `export { checkMember } from ${dist("check.js")};`, budget: 25 * KiB },
   { name: "flexura/combine (cases, presets, envelopes)", code: `export * from ${dist("combine.js")};`, budget: 24 * KiB },
+  { name: "flexura/moving (influence lines, moving loads)", code: `export * from ${dist("moving.js")};`, budget: 27 * KiB },
   { name: "flexura/model (parse, analyze, to JSON)", code: `export * from ${dist("model.js")};`, budget: 95 * KiB },
 ];
 

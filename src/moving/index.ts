@@ -1,0 +1,13 @@
+export type { InfluenceQuantity, ReactionQuantity, ShearQuantity, MomentQuantity, SlopeQuantity, DeflectionQuantity, ReactionInfluence, MemberInfluence } from "./types.js";
+export { memberInfluence, tryMemberInfluence, influenceLine, tryInfluenceLine } from "./influence.js";
+export type { Train, TrainUniform, TrainOptions, CraneImpactKind, DynamicAllowanceRow } from "./train.js";
+export { ASCE7_16_CRANE_IMPACT } from "./train.js";
+export type { TrainPlacement, WorstPlacements, ReactionPlacements } from "./placement.js";
+export { worstPlacements, tryWorstPlacements, trainEffect, reactionPlacements } from "./placement.js";
+export type { MomentPlacement, AbsoluteMoments } from "./absolute.js";
+export { absoluteMoments, tryAbsoluteMoments } from "./absolute.js";
+export type { PlacementFamily, StandingPlacement, AxleAtPointPlacement, MovingEnvelopes, EnvelopeValues } from "./envelope.js";
+export { movingEnvelopes, tryMovingEnvelopes, envelopeAt } from "./envelope.js";
+export { withFixedDiagram, tryWithFixedDiagram } from "./with-fixed.js";
+export type { MovingDeflectionLimit, DeflectionRatioLimit, DeflectionAbsoluteLimit, MovingDeflectionCheck } from "./deflection.js";
+export { movingDeflections, tryMovingDeflections } from "./deflection.js";
