@@ -35,8 +35,9 @@ Options:
   --json       print one JSON object (the results in the model's units, units named) instead
   --svg DIR    also write SVG diagrams into DIR (created if missing): MODEL-member.svg,
                MODEL-shear.svg, MODEL-moment.svg, MODEL-deflection.svg, with a section
-               MODEL-section.svg, and MODEL-figure.svg (the member, shear, moment and
-               deflection stacked on one x axis, as on the calculation sheet)
+               MODEL-section.svg, MODEL-figure.svg (the member, shear, moment and
+               deflection stacked on one x axis, as on the calculation sheet), and with
+               combinations MODEL-moment-envelope.svg (and the shear and deflection envelopes)
   --html FILE  also write the printable calculation sheet (one self-contained HTML page:
                title block with the program version and the input's SHA-256, inputs, one
                figure, results, checks, method and caution); print it to PDF from a browser

@@ -1,5 +1,6 @@
 import type { ModelAnalysis, ModelDiagram, ModelPeaks } from "../model/index.js";
 import { formatReportQuantity, snapToZero } from "./format.js";
+import { envelopeDiagramSvg } from "./envelope-svg.js";
 import { lineDiagramSvg } from "./line-diagram.js";
 import type { DrawnLoad, MemberDrawing } from "./member-drawing.js";
 import { memberSvg } from "./member-svg.js";
@@ -8,7 +9,7 @@ import { outlines } from "../section/index.js";
 import { sectionSvg, type DrawnSectionPart, type SectionDrawing } from "./section-svg.js";
 
 /** Which picture a {@link ReportDiagram} is. */
-export type ReportDiagramName = "member" | "shear" | "moment" | "deflection" | "section";
+export type ReportDiagramName = "member" | "shear" | "moment" | "deflection" | "section" | "shear-envelope" | "moment-envelope" | "deflection-envelope";
 
 /** One SVG drawing of a report, with a name that suits a file name (`moment.svg`). */
 export interface ReportDiagram {
@@ -34,7 +35,9 @@ export interface ReportDiagramsOptions {
  * Every diagram of an analysed model, as SVG strings: the member with its supports and loads to
  * scale; shear, bending moment and deflection along the member with their peaks labelled; and,
  * when the model has a section, the cross-section with its centroid, neutral axis and
- * bending-stress profile at the governing stress. Pure: no I/O.
+ * bending-stress profile at the governing stress; and, when the model has combinations, the
+ * envelopes of shear, moment and deflection (both bounds, each change of governing combination
+ * marked and named, the peaks labelled with their combinations). Pure: no I/O.
  *
  * @param analysis - What `analyzeModel` returned.
  * @param options - Extra drawings.
@@ -73,6 +76,18 @@ export function reportDiagrams(analysis: ModelAnalysis, options: ReportDiagramsO
   out.push(line("deflection", "deflection (positive = upward)", analysis.diagrams.deflection, analysis.deflection, "#2e7d32"));
   const section = sectionDrawing(analysis, name, options.sectionOutline ?? sectionOutlineOf(analysis));
   if (section !== undefined) out.push({ name: "section", title: section.title, svg: sectionSvg(section) });
+  const env = analysis.combinations?.envelopes;
+  if (env !== undefined) {
+    const count = analysis.combinations?.arrangements ?? 0;
+    for (const [key, title, e] of [
+      ["shear-envelope", "shear force envelope", env.shear],
+      ["moment-envelope", "bending moment envelope (positive = sagging)", env.moment],
+      ["deflection-envelope", "deflection envelope (positive = upward)", env.deflection],
+    ] as const) {
+      const full = `${name}: ${title} over ${count} arrangements`;
+      out.push({ name: key, title: full, svg: envelopeDiagramSvg({ title: full, length: model.length, lengthUnit: u.length, envelope: e }) });
+    }
+  }
   return out;
 }
 

@@ -10,6 +10,7 @@ export { REPORT_CAUTION } from "./caution.js";
 export { reportInputs } from "./text-inputs.js";
 export { reportForces, reportSection, reportChecks } from "./text-results.js";
 export { reportCombinations } from "./text-combinations.js";
+export { envelopeDiagramSvg, governingChanges, type EnvelopeDiagramData, type GoverningChange } from "./envelope-svg.js";
 export { textReport, type TextReportOptions, type TextReportInput } from "./text-report.js";
 export { reportDiagrams, type ReportDiagram, type ReportDiagramName, type ReportDiagramsOptions } from "./diagrams.js";
 export {

@@ -120,7 +120,7 @@ describe("analyzeModel with check groups and self-weight", () => {
 
   it("reads the examples: a roof beam under ASCE 7 and a two-span floor beam under EN 1990", () => {
     for (const name of ["roof-beam-asce7.json", "floor-beam-en1990.json"]) {
-      const m = parseModel(JSON.parse(readFileSync(join(import.meta.dirname, "..", "..", "examples", "models", name), "utf8")));
+      const m = parseModel(JSON.parse(readFileSync(join(import.meta.dirname, "..", "..", "examples", "combinations", name), "utf8")));
       const r = analyzeModel(m).combinations!;
       expect(r.combinations.length).toBeGreaterThan(4);
       expect(r.checks.length).toBeGreaterThan(0);

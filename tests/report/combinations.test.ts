@@ -4,7 +4,7 @@ import { describe, expect, it } from "vitest";
 import { analyzeModel, parseModel } from "../../src/model/index.js";
 import { REPORT_CAUTION, reportCombinations, textReport } from "../../src/report/index.js";
 
-const file = (name: string): unknown => JSON.parse(readFileSync(join(import.meta.dirname, "..", "..", "examples", "models", name), "utf8"));
+const file = (name: string): unknown => JSON.parse(readFileSync(join(import.meta.dirname, "..", "..", "examples", "combinations", name), "utf8"));
 
 describe("textReport with load combinations", () => {
   const a = analyzeModel(parseModel(file("roof-beam-asce7.json")));
